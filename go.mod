@@ -1,0 +1,17 @@
+module arcwright
+
+go 1.26
+
+require (
+	github.com/jung-kurt/gofpdf v1.16.2
+	github.com/paulmach/orb v0.14.0
+	github.com/spf13/cobra v1.10.2
+	go.yaml.in/yaml/v3 v3.0.6
+	gonum.org/v1/gonum v0.17.0
+)
+
+require (
+	github.com/inconshreveable/mousetrap v1.1.0 // indirect
+	github.com/spf13/pflag v1.0.9 // indirect
+	go.mongodb.org/mongo-driver/v2 v2.5.0 // indirect
+)
