@@ -1,0 +1,65 @@
+// Package acoustics computes the acoustics a microphone-station planner needs:
+// atmospheric absorption of sound (ISO 9613-1:1993), one-third-octave band
+// tables, wavelengths and far-field criteria, floor-reflection interference,
+// the error of assuming a nozzle-centred source, and a rough level estimate
+// for choosing microphones. It knows nothing about rooms or files.
+//
+// # Units
+//
+// Every parameter and result is SI: metres, seconds, kelvin, pascals, kg/m³,
+// hertz and radians, unless a name says otherwise. Three quantities are kept
+// in the units of the trade and say so in their names and doc comments:
+// relative humidity and molar water-vapour concentration in percent (70 means
+// 70 %), absorption coefficients in dB/m, and levels in dB.
+//
+// # Boundary checks
+//
+// [Atmosphere.Validate] is the package boundary for user data: it rejects
+// NaN, infinite and implausible values with an error naming the field.
+// [ThirdOctaveBands] checks its limits. The physics functions take raw
+// float64 values and do not return errors; the planner validates its inputs
+// before calling them. Each lists its special cases (zero, NaN, infinity)
+// in a "Special cases are:" paragraph, like [math.Hypot].
+//
+// # Sources and status
+//
+// Formulas, constants and check values come from the project reference sheet
+// /work/shared/references/acoustics.md. Each carries the sheet's status tag:
+// CONFIRMED (seen in a named public source), FROM MEMORY (recalled, to be
+// checked against the original), COMPUTED (worked from a stated formula),
+// DERIVED, or SUGGESTION (a model of this project's own). The source of every
+// constant is given beside it.
+//
+// # Atmospheric absorption
+//
+// [Atmosphere.Absorption] gives the pure-tone attenuation coefficient of
+// ISO 9613-1:1993 (the same algorithm as ANSI S1.26) in dB/m. The
+// standard's tables are evaluated at the exact base-ten midbands
+// 1000·10^(k/10) Hz, which [ThirdOctaveBands] returns as [Band.Centre]; use
+// those, not the nominal labels, when comparing with printed tables. For band
+// levels with large attenuation the pure-tone value at midband is not the
+// band attenuation (SAE ARP5534 gives the band method).
+//
+// # Far field and source position
+//
+// [Wavelength], [WaveNumber] and [FresnelRadius] give the acoustic and
+// Fresnel far-field distances. [SourceExtent] is a SUGGESTION model of where
+// a jet radiates a given frequency and how long that region is;
+// [SourceOffset] gives the distance, angle and level errors of treating that
+// source as if it sat at the arc centre.
+//
+// # Floor reflection
+//
+// [FloorReflection] applies the image-source model over a rigid floor;
+// [Reflection] gives null and peak frequencies and the level change at any
+// frequency. [MaxMicHeightForNull] is the design rule that keeps the first
+// null above the highest frequency of interest.
+//
+// # Anechoic practice and microphones
+//
+// [QuarterWave] and [WedgeCutoff] are the λ/4 rules of anechoic-room
+// practice. [EstimateLevel] is a Lighthill-scaling estimate (±5 dB) meant
+// only for choosing a microphone range, and [MicrophoneAdvice] turns it into
+// a suggested nominal microphone size from a typical-values table that the
+// user should check against data sheets.
+package acoustics
