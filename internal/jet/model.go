@@ -1,0 +1,106 @@
+package jet
+
+// Model is a set of correlation constants. Use [NominalModel] for tables and
+// [ConservativeModel] for clearance envelopes; a zero Model is not usable.
+type Model struct {
+	// Name is "nominal" or "conservative".
+	Name string
+	// B is the far-field centreline velocity decay constant,
+	// Uc/Uj = B·D_eff/(x − x0).
+	B float64
+	// S is the far-field spreading rate of the half-velocity radius,
+	// dr½/dx.
+	S float64
+	// X0 is the virtual origin of the far field in fully expanded diameters.
+	X0 float64
+	// KT is the decay constant of the excess total temperature,
+	// ΔTc/ΔTj = KT·D_eff/(x − x0).
+	KT float64
+	// Lambda is the ratio of the thermal half-width to the velocity
+	// half-width.
+	Lambda float64
+	// CoreMin is the shortest potential core the model allows, in fully
+	// expanded diameters (0: no floor).
+	CoreMin float64
+	// HeatedCore, when true, shortens the core of heated jets by Witze's
+	// density exponent; when false the cold-jet core is kept for hot jets.
+	HeatedCore bool
+	// Sigma is the Görtler spreading parameter of the mixing layer from the
+	// nozzle lip, used for the conservative lip-edge construction.
+	Sigma float64
+	// Growth is the single-stream, equal-density vorticity-thickness growth
+	// rate of a mixing layer, dδω/dx.
+	Growth float64
+	// Tail multiplies the radius of the far-field contour, for the measured
+	// tail of the profile being wider than a Gaussian's.
+	Tail float64
+	// PlaneS and PlaneK are the plane-jet spreading rate dy½/dx and decay
+	// constant Uc/U0 = PlaneK·sqrt(b/(x − x0)).
+	PlaneS, PlaneK float64
+}
+
+// NominalModel returns central values of the published constants.
+func NominalModel() Model {
+	return Model{
+		Name: "nominal",
+		// B = 5.8 and S = 0.094: Hussein, Capp & George 1994 (laser-Doppler
+		// data), as quoted in Pope 2000 Table 5.1.
+		B: 5.8,
+		S: 0.094,
+		// x0 ≈ 4 D: Hussein, Capp & George 1994 (from memory).
+		X0: 4,
+		// KT = 5.0: scalar decay of Chen & Rodi 1980 for a mass fraction or
+		// temperature excess.
+		KT: 5.0,
+		// λ = 1.2: Papanicolaou & List 1988 and Fischer et al. 1979, from
+		// memory; 1/sqrt(0.7) = 1.195 for Sc_t = 0.7.
+		Lambda:     1.2,
+		CoreMin:    0,
+		HeatedCore: true,
+		// σ = 11: Liepmann & Laufer 1947 (from memory).
+		Sigma: 11,
+		// δω' = 0.181: Brown & Roshko 1974 (from memory), the σ = 9.8
+		// Görtler value √π/σ.
+		Growth: 0.181,
+		Tail:   1,
+		// S_p = 0.10–0.11 (Gutmark & Wygnanski 1976); K_u = 2.46 from the
+		// Gaussian momentum identity for S_p = 0.11 (derived).
+		PlaneS: 0.11,
+		PlaneK: 2.46,
+	}
+}
+
+// ConservativeModel returns the end of the published scatter that makes a zone
+// bigger: slower decay, faster spreading, a longer core and a wider tail.
+func ConservativeModel() Model {
+	return Model{
+		Name: "conservative",
+		// B = 6.2: Chen & Rodi 1980 and Albertson et al. 1950, the upper end
+		// of 5.7–6.2 in the literature.
+		B: 6.2,
+		// S = 0.10: upper end of 0.086–0.102 (Hussein, Capp & George 1994
+		// hot-wire value 0.102, from memory).
+		S:  0.10,
+		X0: 4,
+		// KT = 5.4: upper end of 5.0–5.4 (Franquet et al. 2015 Eq. 58).
+		KT: 5.4,
+		// λ = 1.3: upper end of 1.1–1.3 (Chen & Rodi 1980 gives 1.28).
+		Lambda: 1.3,
+		// Measured subsonic cores span 4–7 D; never assume less than 7 Dj
+		// for a clearance (SUGGESTION of the project's reference sheet).
+		CoreMin:    7,
+		HeatedCore: false,
+		// σ = 9.8: the low end of 9.8–13.5 (Görtler 1942 with Reichardt's
+		// data, from memory), i.e. the widest mixing layer.
+		Sigma:  9.8,
+		Growth: 0.181,
+		// 1.15: the middle of the 1.1–1.2 radial factor for thresholds
+		// below 10 % of Uc (SUGGESTION, from the tail of Hussein, Capp &
+		// George 1994 Table 4).
+		Tail: 1.15,
+		// S_p = 0.11 and K_u = 2.6: the wide and slow ends of the plane-jet
+		// scatter (Heskestad 1965, from memory).
+		PlaneS: 0.11,
+		PlaneK: 2.6,
+	}
+}

@@ -1,0 +1,246 @@
+package jet
+
+import (
+	"fmt"
+	"math"
+)
+
+// Limits are the thresholds that bound the zones.
+type Limits struct {
+	Velocity    float64 // mean velocity limit, m/s
+	Temperature float64 // total-temperature limit, K (absolute)
+}
+
+// DefaultLimits returns 5 m/s and 50 °C (323.15 K): common practice for
+// keeping people and stands out of an exhaust (a 5 m/s wind barely moves a
+// stand; 50 °C is below the pain threshold of brief skin contact, ISO
+// 13732-1 from memory).
+func DefaultLimits() Limits { return Limits{Velocity: 5, Temperature: 323.15} }
+
+// Plume is the predicted mean flow of one nozzle at one operating point,
+// with its zones for one pair of limits. Build it with [NewPlume]; its
+// methods are safe for concurrent use.
+type Plume struct {
+	nozzle Nozzle
+	cond   Condition
+	exit   Exit
+	limits Limits
+	nom    field
+	cons   field
+	lipW   float64 // half of the long side of the exit (radius for round exits), m
+	lipH   float64 // half of the short side, m
+	buoy   Buoyancy
+	env    [2][2]Envelope // [zone-1][variant-1]
+	flags  []Flag
+}
+
+// NewPlume predicts the plume of nozzle n at operating point c and bounds its
+// zones by lim, with the published constants of [NominalModel] and
+// [ConservativeModel].
+func NewPlume(n Nozzle, c Condition, lim Limits) (*Plume, error) {
+	return NewPlumeWith(n, c, lim, NominalModel(), ConservativeModel())
+}
+
+// NewPlumeWith is [NewPlume] with other constants.
+func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model) (*Plume, error) {
+	e, err := ExitState(n, c)
+	if err != nil {
+		return nil, err
+	}
+	if err := positive("velocity limit", lim.Velocity, "m/s"); err != nil {
+		return nil, err
+	}
+	if err := positive("temperature limit", lim.Temperature, "K"); err != nil {
+		return nil, err
+	}
+	if lim.Temperature <= c.Ambient.Temperature {
+		return nil, &InputError{Field: "temperature limit", Reason: fmt.Sprintf(
+			"(%.2f K) must be above the ambient temperature (%.2f K): otherwise the whole cell is a hot zone",
+			lim.Temperature, c.Ambient.Temperature)}
+	}
+	p := &Plume{nozzle: n, cond: c, exit: e, limits: lim}
+	laminar := e.Reynolds < laminarRoundRe
+	p.nom = newField(nominal, n, e, c.Ambient, laminar)
+	p.cons = newField(conservative, n, e, c.Ambient, false)
+	outer := e.Diameter
+	if n.Kind == Coaxial {
+		outer = n.SecondaryDiameter
+	}
+	p.lipW = math.Max(outer, e.FullyExpandedDiameter) / 2
+	p.lipH = p.lipW
+	if n.Kind == Rectangular {
+		// the fully expanded section is taken as the exit scaled evenly
+		k := math.Max(1, e.FullyExpandedDiameter/e.Diameter)
+		p.lipW, p.lipH = k*n.Width/2, k*n.Height/2
+	}
+	p.buoy = buoyancyOf(e.DensityRatio, e.Velocity, math.Pi*e.FullyExpandedDiameter*e.FullyExpandedDiameter/4)
+	p.buildEnvelopes()
+	p.flags = p.regimeFlags()
+	return p, nil
+}
+
+// Exit returns the fully expanded exit state.
+func (p *Plume) Exit() Exit { return p.exit }
+
+// Nozzle returns the nozzle.
+func (p *Plume) Nozzle() Nozzle { return p.nozzle }
+
+// Condition returns the operating point.
+func (p *Plume) Condition() Condition { return p.cond }
+
+// Limits returns the limits the zones are bounded by.
+func (p *Plume) Limits() Limits { return p.limits }
+
+// Laminar reports whether the nominal field is the laminar solution.
+func (p *Plume) Laminar() bool { return p.nom.laminar }
+
+// CoreLength returns the potential-core length of the given variant, m.
+func (p *Plume) CoreLength(v Variant) float64 {
+	if v == Conservative {
+		return math.Max(p.cons.lc, p.nom.lc)
+	}
+	return p.nom.lc
+}
+
+// Velocity returns the nominal mean axial velocity at (x, r), m/s.
+func (p *Plume) Velocity(x, r float64) float64 { return p.nom.u(x, math.Abs(r)) }
+
+// TotalTemperature returns the nominal mean total temperature at (x, r), K.
+func (p *Plume) TotalTemperature(x, r float64) float64 {
+	return p.cond.Ambient.Temperature + p.nom.dT0*p.nom.theta(x, math.Abs(r))
+}
+
+// Temperature returns the nominal mean static temperature at (x, r), K: the
+// total temperature less the kinetic part u²/(2·cp).
+func (p *Plume) Temperature(x, r float64) float64 {
+	u := p.Velocity(x, r)
+	return p.TotalTemperature(x, r) - u*u/(2*p.exit.Gas.Cp())
+}
+
+// CenterlineVelocity returns the nominal centreline velocity at x, m/s.
+func (p *Plume) CenterlineVelocity(x float64) float64 { return p.Velocity(x, 0) }
+
+// CenterlineTemperature returns the nominal centreline static temperature
+// at x, K.
+func (p *Plume) CenterlineTemperature(x float64) float64 { return p.Temperature(x, 0) }
+
+// HalfVelocityRadius returns the nominal radius where the velocity is half
+// its centreline value, m (for x > 0).
+func (p *Plume) HalfVelocityRadius(x float64) float64 { return p.nom.rc(x) + p.nom.w(x) }
+
+// MixingLayer returns the nominal mixing layer at x.
+func (p *Plume) MixingLayer(x float64) MixingLayer {
+	f := &p.nom
+	ml := MixingLayer{X: x, Inner: f.rc(x)}
+	w := f.w(x)
+	ml.Outer = ml.Inner + w*f.su.inverse(0.01)
+	ml.VorticityThickness = w * gaussianVorticityThickness
+	return ml
+}
+
+// Buoyancy returns how gravity bends the jet.
+func (p *Plume) Buoyancy() Buoyancy { return p.buoy }
+
+// Envelope returns the zone of the given kind and variant. The returned
+// value must not be modified.
+func (p *Plume) Envelope(z Zone, v Variant) *Envelope { return &p.env[z-1][v-1] }
+
+// Flags returns the regime flags, each with its reason.
+func (p *Plume) Flags() []Flag { return p.flags }
+
+// nearEdge returns the conservative lip-edge construction: the outer edge
+// of a Görtler mixing layer drawn from the nozzle lip, r = lip + x·slope,
+// with slope = erfinv(1 − 2ε)/σ for the threshold fraction ε (the project
+// reference sheet's near-field patch, a SUGGESTION; Görtler 1942 profile).
+// Rectangular exits grow from their corners.
+func (p *Plume) nearEdge(x, slope float64) float64 {
+	if slope < 0 {
+		slope = 0
+	}
+	if p.nozzle.Kind == Rectangular {
+		return math.Hypot(p.lipW+slope*x, p.lipH+slope*x)
+	}
+	return p.lipW + slope*x
+}
+
+func (p *Plume) buildEnvelopes() {
+	lim := p.limits
+	// velocity zone
+	uLim := lim.Velocity
+	nomU := func(x float64) float64 { return p.nom.contourU(x, uLim, 1) }
+	consU := func(x float64) float64 { return p.cons.contourU(x, uLim, p.cons.m.Tail) }
+	slopeU := 0.0
+	if eps := uLim / p.exit.Velocity; eps < 1 {
+		slopeU = math.Erfinv(1-2*eps) / p.cons.m.Sigma
+	}
+	nomTipU := p.nom.tipU(uLim)
+	p.env[0][0] = newEnvelope(VelocityZone, Nominal, uLim, nomTipU, nomU, p.nom.lc)
+	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), nomU, consU, slopeU)
+
+	// hot zone, on the excess total temperature
+	tLim := lim.Temperature
+	dT0 := p.nom.dT0
+	if dT0 <= tLim-p.cond.Ambient.Temperature {
+		p.env[1][0] = Envelope{Zone: HotZone, Variant: Nominal, Limit: tLim}
+		p.env[1][1] = Envelope{Zone: HotZone, Variant: Conservative, Limit: tLim}
+		return
+	}
+	eps := (tLim - p.cond.Ambient.Temperature) / dT0
+	nomT := func(x float64) float64 { return p.nom.contourT(x, eps, 1) }
+	consT := func(x float64) float64 { return p.cons.contourT(x, eps, p.cons.m.Tail) }
+	slopeT := p.cons.m.Lambda * math.Erfinv(1-2*eps) / p.cons.m.Sigma
+	nomTipT := p.nom.tipT(eps)
+	p.env[1][0] = newEnvelope(HotZone, Nominal, tLim, nomTipT, nomT, p.nom.lc)
+	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), nomT, consT, slopeT)
+}
+
+// conservative builds a conservative envelope: the largest of the nominal
+// contour, the conservative contour and the lip-edge construction, the
+// latter only until the conservative contour catches up with it.
+func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons func(float64) float64, slope float64) Envelope {
+	length := math.Max(nomTip, consTip)
+	catch := catchUp(func(x float64) float64 { return p.nearEdge(x, slope) }, cons, consTip)
+	radius := func(x float64) float64 {
+		r := max(nom(x), cons(x))
+		if x <= catch {
+			r = max(r, p.nearEdge(x, slope))
+		}
+		return r
+	}
+	return newEnvelope(z, Conservative, limit, length, radius, p.cons.lc, p.nom.lc, catch)
+}
+
+// catchUp returns where far(x) first reaches near(x), for a lip-edge
+// construction near that starts ahead of the contour far: the first x in
+// (0, end] with far(x) ≥ near(x), or end if far never catches up. It
+// returns 0 when near is not ahead just downstream of the exit, so that the
+// construction is only ever used from the lip onward.
+func catchUp(near, far func(float64) float64, end float64) float64 {
+	if end <= 0 {
+		return 0
+	}
+	const n = 64
+	prev := 0.0
+	for i := 1; i <= n; i++ {
+		t := float64(i) / n
+		x := end * t * t
+		if near(x) > far(x) {
+			prev = x
+			continue
+		}
+		if i == 1 {
+			return 0
+		}
+		lo, hi := prev, x
+		for k := 0; k < 60; k++ {
+			mid := (lo + hi) / 2
+			if near(mid) > far(mid) {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		return hi
+	}
+	return end
+}
