@@ -11,8 +11,8 @@ import (
 // Papanikolaou et al. 2012) for Ta = 288.15 K.
 func TestBuoyancy(t *testing.T) {
 	tests := []struct {
-		name             string
-		d, uj, tj        float64
+		name              string
+		d, uj, tj         float64
 		lm, onset, onset1 float64 // onset1: where x_b = 1, 0 = unchecked
 	}{
 		{"take-off-like", 1, 400, 800, 69.9, 39.3, 74.2},

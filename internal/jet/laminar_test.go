@@ -36,7 +36,7 @@ func rk4(f func(t float64, y []float64) []float64, y0 []float64, t0, t1 float64,
 }
 
 // TestBickleyAgainstODE solves the plane laminar jet's similarity equation
-// f''' + f·f'' + f'² = 0, f(0) = 0, f'(0) = 1, f''(0) = 0 (boundary-layer
+// f”' + f·f” + f'² = 0, f(0) = 0, f'(0) = 1, f”(0) = 0 (boundary-layer
 // equations with ψ = 3νB·x^(1/3)·f(η), η = B·y/x^(2/3), derived) by RK4 and
 // checks that PlaneLaminarJet's profile is its solution: u/um = f'(η) with
 // η = √2·ξ (Bickley 1937; closed form sech², CONFIRMED on public pages).
@@ -80,7 +80,7 @@ func TestBickleyAgainstODE(t *testing.T) {
 }
 
 // TestSchlichtingAgainstODE solves the round laminar jet's similarity
-// equation F·F' = F' − η·F'' (boundary-layer equations with ψ = ν·x·F(η),
+// equation F·F' = F' − η·F” (boundary-layer equations with ψ = ν·x·F(η),
 // η = r/x, integrated once; derived), written for G = F'/η as F' = η·G,
 // G' = −(F/η)·G with F(0) = 0, G(0) = 2γ², and checks that
 // RoundLaminarJet's profile is its solution (Schlichting 1933, closed form
