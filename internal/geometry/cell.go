@@ -1,0 +1,143 @@
+package geometry
+
+import (
+	"math"
+
+	"github.com/paulmach/orb"
+	"gonum.org/v1/gonum/spatial/r3"
+)
+
+// Obstacle is a fixed object in the cell (a rig, a column, a cable tray)
+// occupying its footprint from height ZMin to ZMax above the floor, m.
+type Obstacle struct {
+	Name      string
+	Footprint Footprint
+	ZMin      float64 // bottom above the floor, m
+	ZMax      float64 // top above the floor, m; at least ZMin
+}
+
+// Solid returns the obstacle as a vertical prism.
+func (o Obstacle) Solid() Solid {
+	return Solid{Name: o.Name, Footprint: o.Footprint, ZMin: o.ZMin, ZMax: o.ZMax}
+}
+
+// KeepOut is a zone of the floor where no stand may stand, over the full
+// height of the cell (a walkway, a door swing, a fuel line).
+type KeepOut struct {
+	Name      string
+	Footprint Footprint
+}
+
+// Collector is the exhaust collector: a duct whose round inlet faces the jet.
+type Collector struct {
+	Inlet    r3.Vec  // centre of the inlet plane, cell frame, m
+	Diameter float64 // inlet diameter, m
+	Heading  float64 // heading of the duct axis in plan, rad from +X counter-clockwise, pointing into the duct
+}
+
+// Axis returns the unit vector along the collector axis, horizontal,
+// pointing from the inlet into the duct.
+func (c Collector) Axis() r3.Vec {
+	s, co := math.Sincos(c.Heading)
+	return r3.Vec{X: co, Y: s}
+}
+
+// Mark is a named reference mark on the floor (a datum pin, a grid
+// intersection) from which a technician measures.
+type Mark struct {
+	Name string
+	At   orb.Point // position, cell frame, m
+}
+
+// Cell is a test cell in plan and height, in cell-frame metres.
+//
+// The zero Cell is an unbounded anechoic space with a hard floor and a
+// ceiling at height 0, which [Cell.Validate] rejects: set Ceiling to
+// math.Inf(1) for open sky.
+type Cell struct {
+	Kind Kind
+	// Boundary is the closed outline in plan that microphones must stay
+	// inside: the wedge-tip plane of an anechoic chamber, the inner wall face
+	// of a hard-walled cell or the site limit of an outdoor pad. Either
+	// orientation. Empty means unbounded (an open pad).
+	Boundary       orb.Ring
+	Ceiling        float64 // height of the ceiling (wedge tips) above the floor, m; +Inf for open sky
+	Floor          Surface
+	TreatmentDepth float64 // depth of the acoustic treatment behind the boundary, m, for drawing; 0 if none
+	Obstacles      []Obstacle
+	KeepOuts       []KeepOut
+	Collector      *Collector // nil if none
+	Marks          []Mark
+}
+
+// Bounded reports whether the cell has a boundary.
+func (c *Cell) Bounded() bool { return len(c.Boundary) > 0 }
+
+// Contains reports whether plan point p (m) is inside the boundary. Points on
+// the boundary, within [BoundaryTol], are inside. Every point is inside an
+// unbounded cell; a point with a NaN coordinate is inside none.
+func (c *Cell) Contains(p orb.Point) bool {
+	if isNaNPoint(p) {
+		return false
+	}
+	if !c.Bounded() {
+		return true
+	}
+	d2, inside := ringQuery(c.Boundary, p)
+	return inside || d2 <= boundaryTol2
+}
+
+// WallDistance returns the signed plan distance, m, from p to the boundary:
+// positive inside, 0 on it (within BoundaryTol), negative outside, and +Inf
+// when the cell is unbounded. NaN when p has a NaN coordinate.
+// WallDistance(p) >= 0 exactly when Contains(p).
+func (c *Cell) WallDistance(p orb.Point) float64 {
+	if isNaNPoint(p) {
+		return math.NaN()
+	}
+	if !c.Bounded() {
+		return math.Inf(1)
+	}
+	if d := signedRingDistance(c.Boundary, p); d != 0 {
+		return -d
+	}
+	return 0 // not −0
+}
+
+// Extent returns the rectangle to draw, m: the bound of the boundary when
+// the cell is bounded; otherwise the bound of the datum (the origin), the
+// obstacles, the keep-out zones, the collector inlet disc and the marks.
+// The treatment behind the boundary is not included; pad by TreatmentDepth
+// to draw it.
+func (c *Cell) Extent() orb.Bound {
+	if c.Bounded() {
+		return c.Boundary.Bound()
+	}
+	b := orb.Bound{}
+	for _, o := range c.Obstacles {
+		b = b.Union(o.Footprint.Bound())
+	}
+	for _, k := range c.KeepOuts {
+		b = b.Union(k.Footprint.Bound())
+	}
+	if col := c.Collector; col != nil {
+		r := col.Diameter / 2
+		b = b.Union(orb.Bound{
+			Min: orb.Point{col.Inlet.X - r, col.Inlet.Y - r},
+			Max: orb.Point{col.Inlet.X + r, col.Inlet.Y + r},
+		})
+	}
+	for _, m := range c.Marks {
+		b = b.Extend(m.At)
+	}
+	return b
+}
+
+// Solids returns the obstacles as vertical prisms, in order, for [NewIndex].
+func (c *Cell) Solids() []Solid {
+	out := make([]Solid, len(c.Obstacles))
+	for i, o := range c.Obstacles {
+		out[i] = o.Solid()
+	}
+	return out
+}
