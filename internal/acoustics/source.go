@@ -12,6 +12,7 @@ const (
 	sourceMinD       = 1.0  // lower clamp of xs/dj
 	sourceMaxD       = 15.0 // upper clamp of xs/dj
 	sourceLengthMaxD = 20.0 // upper clamp of L/dj
+	sourceCompactD   = 4.0  // L·St/dj: the radiating region shrinks as 1/St
 )
 
 // SourceExtent returns, for a jet of fully expanded diameter dj (m) and
@@ -23,22 +24,25 @@ const (
 // With the Strouhal number St = f·dj/uj,
 //
 //	xs/dj = 2 + 1/St, clamped to [1, 15]
-//	L     = 2·xs,     clamped to at most 20·dj
+//	L/dj  = 4/St,     clamped to at most 20
 //
 // It is fitted to the literature ranges quoted in acoustics.md §6.4 (FROM
 // MEMORY, medium confidence, phased-array and polar-correlation studies):
 // sources at St ≳ 1 lie within about 1–4 D of the exit (the model gives
 // 2–3 D), sources at St ≈ 0.1–0.3 lie near x ≈ 5–12 D (the model gives
 // 12 D at St = 0.1, 7 D at 0.2, 5.3 D at 0.3), and the whole region spans
-// about 10–20 D (L is capped at 20 D). Baars, Murray & Tinney (J. Fluid
-// Mech., 2021) confirm that the source position depends on frequency but
-// are not the source of these numbers. For a 50.8 mm nozzle at 300 m/s and
-// 10 kHz it gives L = 5.2 D, against the 5 D example of acoustics.md §2.1.
+// about 10–20 D (L is capped at 20 D). The length falls as 1/St so that
+// high-frequency sources are compact near the nozzle, as acoustics.md §2.1
+// asks of a frequency-dependent Fresnel test: the bands near the spectral
+// peak (St ≈ 0.2) radiate from the whole 20 D region, St = 1 from about
+// 4 D, St = 10 from 0.4 D. Baars, Murray & Tinney (J. Fluid Mech., 2021)
+// confirm that the source position depends on frequency but are not the
+// source of these numbers.
 //
 // Special cases are:
 //
 //	SourceExtent(0, dj, uj) = 15·dj, 20·dj for uj > 0 (St = 0)
-//	SourceExtent(f, dj, 0) = 2·dj, 4·dj for f·dj > 0 (St = +Inf)
+//	SourceExtent(f, dj, 0) = 2·dj, 0 for f·dj > 0 (St = +Inf)
 //	SourceExtent(f, dj, uj) = NaN, NaN if any argument is NaN, or f·dj == uj == 0
 func SourceExtent(f, dj, uj float64) (xs, length float64) {
 	st := f * dj / uj
@@ -50,7 +54,7 @@ func SourceExtent(f, dj, uj float64) (xs, length float64) {
 		xsD = sourceMaxD
 	}
 	xsD = math.Min(math.Max(xsD, sourceMinD), sourceMaxD)
-	lD := math.Min(2*xsD, sourceLengthMaxD)
+	lD := math.Min(sourceCompactD/st, sourceLengthMaxD)
 	return xsD * dj, lD * dj
 }
 

