@@ -105,42 +105,39 @@ func (e *Envelope) Clearance(x, r float64) float64 {
 func (e *Envelope) outlineDistance(x, r float64) float64 {
 	p := e.Points
 	n := len(p) - 1 // segments i: p[i]→p[i+1]
-	best := math.Inf(1)
-	seg := func(i int) {
-		if d := segmentDistance(x, r, p[i], p[i+1]); d < best {
-			best = d
-		}
-	}
-	// segment 0 is the exit plane (x = 0); handle it apart.
-	seg(0)
+	// squared distances in the loop; one square root at the end
+	best := segmentDistanceSquared(x, r, p[0], p[1]) // the exit plane
 	k := sort.Search(n-1, func(i int) bool { return p[i+2][0] >= x }) + 1
 	if k > n-1 {
 		k = n - 1
 	}
 	for i := k; i >= 1; i-- {
-		if x-p[i+1][0] > best {
+		if g := x - p[i+1][0]; g > 0 && g*g > best {
 			break
 		}
-		seg(i)
+		best = min(best, segmentDistanceSquared(x, r, p[i], p[i+1]))
 	}
 	for i := k + 1; i < n; i++ {
-		if p[i][0]-x > best {
+		if g := p[i][0] - x; g > 0 && g*g > best {
 			break
 		}
-		seg(i)
+		best = min(best, segmentDistanceSquared(x, r, p[i], p[i+1]))
 	}
-	return best
+	return math.Sqrt(best)
 }
 
-func segmentDistance(x, r float64, a, b [2]float64) float64 {
+// segmentDistanceSquared returns the squared distance from (x, r) to the
+// segment ab.
+func segmentDistanceSquared(x, r float64, a, b [2]float64) float64 {
 	dx, dr := b[0]-a[0], b[1]-a[1]
 	l2 := dx*dx + dr*dr
 	t := 0.0
 	if l2 > 0 {
 		t = ((x-a[0])*dx + (r-a[1])*dr) / l2
-		t = math.Max(0, math.Min(1, t))
+		t = max(0, min(1, t))
 	}
-	return math.Hypot(x-(a[0]+t*dx), r-(a[1]+t*dr))
+	ex, er := x-(a[0]+t*dx), r-(a[1]+t*dr)
+	return ex*ex + er*er
 }
 
 // newEnvelope samples radius on [0, length] into an outline. kinks are axial
