@@ -1,0 +1,650 @@
+package planner
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"github.com/paulmach/orb"
+	"gonum.org/v1/gonum/spatial/r3"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/geometry"
+	"arcwright/internal/jet"
+)
+
+// Thresholds of the acoustic checks.
+const (
+	// minWavelengths is the smallest distance from the source, in
+	// wavelengths at the band's low end, for the acoustic far field
+	// (R ≥ 2λ; common practice, acoustics reference sheet §2.1).
+	minWavelengths = 2
+	// sourceOffsetLimit is the largest level error, dB, of treating the
+	// source as sitting at the arc centre before a warning: about the
+	// ±1 dB that free-field qualification allows (ISO 3745 Annex A, from
+	// memory).
+	sourceOffsetLimit = 1.0
+	// entrainmentCoefficient is Ricou & Spalding's (1961) entrainment rate
+	// of a round jet, ṁ/ṁ0 = 0.32·(ρa/ρj)^½·x/D (from memory). The radial
+	// inflow it draws at distance d from the axis is
+	// V = 0.32/8·Uj·D_eff/d (derived: line sink of strength dṁ/dx).
+	entrainmentCoefficient = 0.32
+	// flushHeight is the microphone height below which a microphone counts
+	// as flush with the floor, m (common practice: ground-plane capsules sit
+	// a few millimetres above their plate).
+	flushHeight = 0.02
+	// sightSamples is the number of points along the source region that
+	// sight lines are drawn from.
+	sightSamples = 5
+	// boomStep is the spacing, m, of the samples along a boom.
+	boomStep = 0.05
+)
+
+// higherIsWorse lists the checks whose larger values are worse.
+var higherIsWorse = map[string]bool{CheckSourceErr: true, CheckAbsorption: true, CheckInflow: true, CheckBuoyancy: true}
+
+// worse reports whether a is worse than b (same check).
+func worse(a, b Check) bool {
+	if a.Verdict != b.Verdict {
+		return a.Verdict > b.Verdict
+	}
+	av, bv := a.Value, b.Value
+	if a.Name == CheckSourceErr {
+		av, bv = math.Abs(av), math.Abs(bv)
+	}
+	switch {
+	case math.IsNaN(bv):
+		return !math.IsNaN(av)
+	case math.IsNaN(av):
+		return false
+	case higherIsWorse[a.Name]:
+		return av > bv
+	}
+	return av < bv
+}
+
+// tally keeps the worst result of each check over the operating points.
+type tally struct {
+	c   [len(checkNames)]Check
+	has [len(checkNames)]bool
+}
+
+// checkNames lists the checks in the order they are reported.
+var checkNames = [...]string{
+	CheckVelocity, CheckHot, CheckWall, CheckObstacle, CheckKeepOut, CheckHeight, CheckSpacing,
+	CheckSight, CheckFarField, CheckWavelength, CheckFresnel, CheckSourceErr, CheckGround,
+	CheckAbsorption, CheckInflow, CheckBuoyancy,
+}
+
+var checkIndex = func() map[string]int {
+	m := map[string]int{}
+	for i, n := range checkNames {
+		m[n] = i
+	}
+	return m
+}()
+
+func (t *tally) add(c Check) { t.offer(c, func(c Check) string { return c.Reason }) }
+
+// offer keeps c if it is worse than what t holds, writing its reason only
+// then: most per-point results are not kept, and formatting them all would
+// dominate the planner's time.
+func (t *tally) offer(c Check, reason func(c Check) string) {
+	i := checkIndex[c.Name]
+	if !t.has[i] || worse(c, t.c[i]) {
+		c.Reason = reason(c)
+		t.c[i], t.has[i] = c, true
+	}
+}
+
+// get returns the kept result of a check.
+func (t *tally) get(name string) (Check, bool) {
+	i := checkIndex[name]
+	return t.c[i], t.has[i]
+}
+
+// probe is a sample of a station's hardware in the jet frame: the distance
+// from a zone at (x, r), less pen, bounds the hardware's clearance.
+type probe struct {
+	x, r, pen float64
+	part      string
+}
+
+// checker holds what the checks of every station share.
+type checker struct {
+	req       *Request
+	lim       Limits
+	points    []PointResult
+	order     []int // points, governing first
+	atm       acoustics.Atmosphere
+	c         float64 // speed of sound, m/s
+	lambdaLow float64 // wavelength at the band's low end, m
+	quarter   float64 // λ/4 at the band's low end where walls are treated, else 0
+	alphaHigh float64 // absorption at the band's top, dB/m
+	bands     []acoustics.Band
+	obstacles *geometry.Index
+	stands    *geometry.Index
+	feet      []foot // stand footprints, by station index
+	sources   []r3.Vec
+	srcPoint  string // the point whose source region is longest
+	maxFoot   float64
+	fresnel   [][]float64 // L²/λ per point and band, m
+}
+
+// foot is a stand's plan footprint.
+type foot struct {
+	at orb.Point
+	r  float64
+}
+
+// hardware returns the jet-frame probes of station st.
+func (ck *checker) hardware(st *Station) (fixed []probe, boom []probe) {
+	f := ck.req.Exit
+	mic := f.ToJet(st.Mic)
+	fixed = append(fixed, probe{mic.X, mic.R, 0, "microphone"})
+	s := st.Stand
+	if s == nil {
+		return fixed, nil
+	}
+	zAxis := f.Exit.Z
+	top := st.Mic.Z
+	at := func(z float64) geometry.JetPoint { return f.ToJet(r3.Vec{X: st.Base[0], Y: st.Base[1], Z: z}) }
+	// the pole's point nearest the axis is at axis height (clamped to the
+	// pole): the distance to a body of revolution never grows toward it
+	pole := at(math.Max(0, math.Min(zAxis, top)))
+	fixed = append(fixed, probe{pole.X, pole.R, s.PoleDiameter / 2, "stand pole"})
+	ptop := at(top)
+	fixed = append(fixed, probe{ptop.X, ptop.R, s.PoleDiameter / 2, "stand pole"})
+	base := at(math.Max(0, math.Min(zAxis, s.BaseHeight)))
+	fixed = append(fixed, probe{base.X, base.R, s.BaseRadius, "stand base"})
+	if s.BoomLength > 0 {
+		b := r3.Vec{X: st.Base[0], Y: st.Base[1], Z: top}
+		n := int(math.Ceil(s.BoomLength / boomStep))
+		n = max(2, min(n, 32))
+		h := s.BoomLength / float64(n)
+		for i := 1; i < n; i++ {
+			p := f.ToJet(r3.Add(b, r3.Scale(float64(i)/float64(n), r3.Sub(st.Mic, b))))
+			// every point of the boom is within h/2 of a sample
+			boom = append(boom, probe{p.X, p.R, h/2 + s.PoleDiameter/2, "boom"})
+		}
+	}
+	return fixed, boom
+}
+
+// zoneClearance returns the clearance of the probes from e and the part
+// that sets it; best is the smallest clearance found so far for other
+// points: probes that cannot beat it are skipped.
+func zoneClearance(e *jet.Envelope, fixed, boom []probe, best float64) (float64, string) {
+	if e.Length == 0 {
+		return math.Inf(1), ""
+	}
+	min, part := math.Inf(1), ""
+	try := func(p probe) {
+		// the distance to the zone's bounding box bounds the clearance
+		dx := math.Max(0, math.Max(-p.x, p.x-e.Length))
+		dr := math.Max(0, p.r-e.MaxRadius)
+		if lb := math.Hypot(dx, dr) - e.Tolerance - p.pen; lb >= math.Min(min, best) {
+			return
+		}
+		if c := e.Clearance(p.x, p.r) - p.pen; c < min {
+			min, part = c, p.part
+		}
+	}
+	for _, p := range fixed {
+		try(p)
+	}
+	for _, p := range boom {
+		try(p)
+	}
+	return min, part
+}
+
+// evaluate runs every check on station i and sets its verdict.
+func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
+	t := &tally{}
+	lim := ck.lim
+	cell := &ck.req.Cell
+	f := ck.req.Exit
+	mic := f.ToJet(st.Mic)
+	fixed, boom := ck.hardware(st)
+
+	// 1. zones, for every operating point, governing point first
+	bestV, bestH := math.Inf(1), math.Inf(1)
+	for _, k := range ck.order {
+		p := &ck.points[k]
+		for _, z := range []struct {
+			name string
+			env  *jet.Envelope
+			best *float64
+			what func() string
+		}{
+			{CheckVelocity, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %.3g m/s)", lim.Velocity) }},
+			{CheckHot, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %.0f °C)", lim.Temperature-273.15) }},
+		} {
+			c, part := zoneClearance(z.env, fixed, boom, *z.best)
+			if _, seen := t.get(z.name); seen && c >= *z.best {
+				continue
+			}
+			*z.best = math.Min(*z.best, c)
+			ch := Check{Name: z.name, Value: c, Unit: "m", Verdict: OK, Point: p.Name}
+			if c < lim.Margin {
+				ch.Verdict = Blocked
+			}
+			what := z.what
+			t.offer(ch, func(ch Check) (reason string) {
+				switch {
+				case math.IsInf(c, 1):
+					reason = "no " + what() + " at this point"
+				case c < 0:
+					reason = fmt.Sprintf("%s inside the %s of %s, %.2f m deep", part, what(), p.Name, -c)
+				case c < lim.Margin:
+					reason = fmt.Sprintf("%s %.2f m from the %s of %s; the margin is %.2f m", part, c, what(), p.Name, lim.Margin)
+				default:
+					reason = fmt.Sprintf("%.2f m clear of the %s of %s", c, what(), p.Name)
+				}
+				return
+			})
+		}
+	}
+
+	// 2. room: boundary, obstacles, keep-outs, floor and ceiling
+	var pc geometry.PoleClearance
+	if st.Stand != nil {
+		pc = cell.PoleClearance(st.Base, math.Max(st.Mic.Z, 0), st.Stand.PoleDiameter/2, st.Stand.BaseRadius)
+	} else {
+		pc = cell.PoleClearance(st.Base, 0, flushRadius, flushRadius)
+	}
+	micPlan := orb.Point{st.Mic.X, st.Mic.Y}
+	wall := math.Min(pc.Wall, cell.WallDistance(micPlan))
+	wc := Check{Name: CheckWall, Value: wall, Unit: "m", Verdict: OK}
+	switch {
+	case math.IsInf(wall, 1):
+		wc.Reason = "open site: no boundary"
+	case wall < 0:
+		wc.Verdict = Blocked
+		wc.Reason = fmt.Sprintf("outside the room or crossing its boundary by %.2f m", -wall)
+	case wall < lim.WallClearance:
+		wc.Verdict = Blocked
+		wc.Reason = fmt.Sprintf("%.2f m from the boundary; the layout asks %.2f m", wall, lim.WallClearance)
+	case wall < ck.quarter:
+		wc.Verdict = Warn
+		wc.Reason = fmt.Sprintf("%.2f m from the wedge tips, less than a quarter wavelength (%.2f m) at %.0f Hz: reflections from the treatment (common practice)", wall, ck.quarter, ck.req.Band.Low)
+	default:
+		wc.Reason = fmt.Sprintf("%.2f m from the boundary", wall)
+	}
+	t.add(wc)
+
+	obst, oname := pc.Obstacle, pc.ObstacleName
+	for _, o := range cell.Obstacles {
+		if d := o.Solid().Distance(st.Mic); d < obst {
+			obst, oname = d, o.Name
+		}
+	}
+	oc := Check{Name: CheckObstacle, Value: obst, Unit: "m", Verdict: OK}
+	switch {
+	case math.IsInf(obst, 1):
+		oc.Reason = "no obstacle near"
+	case obst < 0:
+		oc.Verdict = Blocked
+		oc.Reason = fmt.Sprintf("overlaps %s by %.2f m", oname, -obst)
+	case obst < lim.StandSpacing:
+		oc.Verdict = Warn
+		oc.Reason = fmt.Sprintf("%.2f m from %s", obst, oname)
+	default:
+		oc.Reason = fmt.Sprintf("%.2f m from %s", obst, oname)
+	}
+	t.add(oc)
+
+	ko, kname := pc.KeepOut, pc.KeepOutName
+	for _, k := range cell.KeepOuts {
+		if d := k.Footprint.Distance(micPlan); d < ko {
+			ko, kname = d, k.Name
+		}
+	}
+	kc := Check{Name: CheckKeepOut, Value: ko, Unit: "m", Verdict: OK}
+	switch {
+	case math.IsInf(ko, 1):
+		kc.Reason = "no keep-out zone"
+	case ko < 0:
+		kc.Verdict = Blocked
+		kc.Reason = fmt.Sprintf("in the keep-out zone %s", kname)
+	default:
+		kc.Reason = fmt.Sprintf("%.2f m from the keep-out zone %s", ko, kname)
+	}
+	t.add(kc)
+
+	h := st.Mic.Z
+	hc := Check{Name: CheckHeight, Value: math.Min(h, cell.Ceiling-h), Unit: "m", Verdict: OK}
+	switch {
+	case h < -1e-9:
+		hc.Verdict = Blocked
+		hc.Reason = fmt.Sprintf("%.2f m below the floor", -h)
+	case h > cell.Ceiling:
+		hc.Verdict = Blocked
+		hc.Reason = fmt.Sprintf("%.2f m above the ceiling", h-cell.Ceiling)
+	case cell.Kind == geometry.Anechoic && cell.Ceiling-h < ck.quarter:
+		hc.Verdict = Warn
+		hc.Reason = fmt.Sprintf("%.2f m below the ceiling treatment, less than a quarter wavelength at %.0f Hz", cell.Ceiling-h, ck.req.Band.Low)
+	case math.IsInf(cell.Ceiling, 1):
+		hc.Value = h
+		hc.Reason = fmt.Sprintf("%.2f m above the floor, open sky", h)
+	default:
+		hc.Reason = fmt.Sprintf("%.2f m above the floor, %.2f m below the ceiling", h, cell.Ceiling-h)
+	}
+	t.add(hc)
+
+	// 3. spacing from other stands
+	t.add(ck.spacing(st, i))
+
+	isMic := st.Kind != Probes
+	// 4. sight line from the source region
+	if isMic {
+		t.add(ck.sight(st, i))
+	}
+
+	// 5–10: acoustics, per point
+	if isMic {
+		ck.acoustic(st, mic, centreX, t)
+	}
+	ck.finish(st, t)
+}
+
+// spacing checks the gap to the nearest other stand.
+func (ck *checker) spacing(st *Station, i int) Check {
+	me := ck.feet[i]
+	best, who := math.Inf(1), -1
+	var near []int
+	near = ck.stands.AppendNear(near[:0], me.at, me.r+ck.maxFoot+ck.lim.StandSpacing)
+	for _, j := range near {
+		if j == i {
+			continue
+		}
+		o := ck.feet[j]
+		g := math.Hypot(o.at[0]-me.at[0], o.at[1]-me.at[1]) - me.r - o.r
+		if g < best {
+			best, who = g, j
+		}
+	}
+	c := Check{Name: CheckSpacing, Value: best, Unit: "m", Verdict: OK}
+	if who < 0 {
+		c.Reason = fmt.Sprintf("no other stand within %.2f m", ck.lim.StandSpacing)
+		return c
+	}
+	other := ck.stands.Solid(who).Name
+	switch {
+	case best < 0:
+		c.Verdict = Blocked
+		c.Reason = fmt.Sprintf("overlaps the stand of %s by %.2f m", other, -best)
+	case best < ck.lim.StandSpacing:
+		c.Verdict = Warn
+		c.Reason = fmt.Sprintf("%.2f m from the stand of %s; the layout asks %.2f m", best, other, ck.lim.StandSpacing)
+	default:
+		c.Reason = fmt.Sprintf("%.2f m from the stand of %s", best, other)
+	}
+	return c
+}
+
+// sight checks the lines from points along the source region to the
+// microphone against obstacles and other stands.
+func (ck *checker) sight(st *Station, i int) Check {
+	blocked := 0
+	by := map[string]bool{}
+	var names []string
+	var hits []int
+	for _, s := range ck.sources {
+		hit := false
+		hits = ck.obstacles.AppendSegmentHits(hits[:0], s, st.Mic)
+		for _, j := range hits {
+			hit = true
+			if n := ck.obstacles.Solid(j).Name; !by[n] {
+				by[n] = true
+				names = append(names, n)
+			}
+		}
+		hits = ck.stands.AppendSegmentHits(hits[:0], s, st.Mic)
+		for _, j := range hits {
+			if j == i {
+				continue
+			}
+			hit = true
+			if n := "the stand of " + ck.stands.Solid(j).Name; !by[n] {
+				by[n] = true
+				names = append(names, n)
+			}
+		}
+		if hit {
+			blocked++
+		}
+	}
+	frac := 1 - float64(blocked)/float64(len(ck.sources))
+	c := Check{Name: CheckSight, Value: frac, Unit: "", Verdict: OK, Point: ck.srcPoint}
+	switch {
+	case blocked == 0:
+		c.Reason = "clear view of the source region"
+	case frac == 0:
+		c.Verdict = Blocked
+		c.Reason = "no view of the source region: hidden by " + strings.Join(names, ", ")
+	default:
+		c.Verdict = Warn
+		c.Reason = fmt.Sprintf("%d of %d sight lines to the source region pass through %s", blocked, len(ck.sources), strings.Join(names, ", "))
+	}
+	return c
+}
+
+// acoustic runs the far-field, floor, absorption, inflow and buoyancy
+// checks for every operating point.
+func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64, t *tally) {
+	req := ck.req
+	lim := ck.lim
+	r := st.Radius
+	band := req.Band
+
+	wl := r / ck.lambdaLow
+	wcheck := Check{Name: CheckWavelength, Value: wl, Unit: "λ", Verdict: OK,
+		Reason: fmt.Sprintf("%.1f wavelengths from the source at %.0f Hz", wl, band.Low)}
+	if wl < minWavelengths {
+		wcheck.Verdict = Warn
+		wcheck.Reason = fmt.Sprintf("only %.2f wavelengths from the source at %.0f Hz; the acoustic far field needs about 2 (common practice)", wl, band.Low)
+	}
+	t.add(wcheck)
+
+	ab := ck.alphaHigh * r
+	ac := Check{Name: CheckAbsorption, Value: ab, Unit: "dB", Verdict: OK,
+		Reason: fmt.Sprintf("%.2f dB of air absorption at %.3g kHz over %.2f m (ISO 9613-1)", ab, band.High/1000, r)}
+	if ab > lim.Absorption {
+		ac.Verdict = Warn
+		ac.Reason += fmt.Sprintf(", above the %.3g dB the layout allows: correct the spectra to lossless", lim.Absorption)
+	}
+	t.add(ac)
+
+	hard := req.Cell.Floor == geometry.Hard
+	flush := st.Mic.Z < flushHeight
+	for _, k := range ck.order {
+		p := &ck.points[k]
+		e := p.Exit
+		dj := e.FullyExpandedDiameter
+
+		ratio := r / dj
+		fc := Check{Name: CheckFarField, Value: ratio, Unit: "Dj", Verdict: OK, Point: p.Name}
+		if ratio < lim.FarFieldRatio {
+			fc.Verdict = Warn
+		}
+		t.offer(fc, func(c Check) (reason string) {
+			reason = fmt.Sprintf("R/Dj = %.0f for %s", ratio, p.Name)
+			if c.Verdict == Warn {
+				reason = fmt.Sprintf("R/Dj = %.1f for %s, below the %.0f the layout asks (common practice)", ratio, p.Name, lim.FarFieldRatio)
+			}
+			return
+		})
+
+		needs := ck.fresnel[k]
+		need := 0.0
+		first, last := -1, -1
+		for b, n := range needs {
+			need = math.Max(need, n)
+			if n > r {
+				if first < 0 {
+					first = b
+				}
+				last = b
+			}
+		}
+		fr := Check{Name: CheckFresnel, Value: r / need, Unit: "", Verdict: OK, Point: p.Name}
+		if first >= 0 {
+			fr.Verdict = Warn
+		}
+		t.offer(fr, func(c Check) (reason string) {
+			if first < 0 {
+				reason = fmt.Sprintf("R ≥ L²/λ across the band for %s (R is %.2f times the largest L²/λ)", p.Name, r/need)
+				return
+			}
+			span := ck.bands[first].Nominal
+			if last > first {
+				span = "bands " + span + " to " + ck.bands[last].Nominal
+			}
+			reason = fmt.Sprintf("the Fresnel condition R ≥ L²/λ fails at %s for %s: the source region (up to %.2f m long there) is not compact seen from %.2f m; it needs %.2f m", span, p.Name, sourceLength(ck.bands[first:last+1], dj, e.Velocity), r, need)
+			return
+		})
+
+		xs := p.CoreNominal - centreX
+		q := geometry.JetPoint{X: mic.X - centreX, R: mic.R}
+		_, thTrue, lerr := acoustics.SourceOffset(q.Distance(), q.Polar(), xs)
+		sc := Check{Name: CheckSourceErr, Value: lerr, Unit: "dB", Verdict: OK, Point: p.Name}
+		if math.Abs(lerr) > sourceOffsetLimit {
+			sc.Verdict = Warn
+		}
+		t.offer(sc, func(c Check) (reason string) {
+			dth := (thTrue - q.Polar()) * 180 / math.Pi
+			reason = fmt.Sprintf("%+.2f dB, %+.1f° from a source at the end of the core of %s", lerr, dth, p.Name)
+			if c.Verdict == Warn {
+				reason = fmt.Sprintf("treating the source as at the array centre errs by %+.2f dB and %+.1f° for %s (source near the end of the core, %.2f m downstream)", lerr, dth, p.Name, p.CoreNominal)
+			}
+			return
+		})
+
+		gc := Check{Name: CheckGround, Value: math.NaN(), Unit: "Hz", Verdict: OK, Point: p.Name}
+		switch {
+		case !hard:
+			t.offer(gc, func(c Check) (reason string) {
+				reason = fmt.Sprintf("%s floor: no coherent floor reflection assumed", req.Cell.Floor)
+				return
+			})
+		case flush:
+			t.offer(gc, func(c Check) (reason string) {
+				reason = "flush on the floor: no null; the level is doubled (subtract 6 dB)"
+				return
+			})
+		default:
+			src := req.Exit.ToCell(geometry.JetPoint{X: p.CoreNominal})
+			d := math.Hypot(st.Mic.X-src.X, st.Mic.Y-src.Y)
+			hs := req.Exit.Exit.Z
+			refl := acoustics.FloorReflection(hs, st.Mic.Z, d)
+			gc.Value = refl.NullFrequency(0, ck.c)
+			fnull, in := acoustics.FirstNullInBand(refl, ck.c, band.Low, band.High)
+			if in {
+				gc.Verdict = Warn
+			}
+			t.offer(gc, func(c Check) (reason string) {
+				if !in {
+					reason = fmt.Sprintf("first floor null at %.0f Hz, outside the band", c.Value)
+					return
+				}
+				hmax := ck.c * d / (4 * hs * band.High)
+				reason = fmt.Sprintf("floor-reflection null at %.0f Hz inside the band (source %.2f m, microphone %.2f m high, %.2f m apart): use a ground-plane microphone, or lower it below about %.3f m to move the first null above %.3g kHz", fnull, hs, st.Mic.Z, d, hmax, band.High/1000)
+				return
+			})
+		}
+
+		dist := mic.R
+		if mic.X < 0 {
+			dist = mic.Distance()
+		}
+		v := entrainmentCoefficient / 8 * e.Velocity * e.EffectiveDiameter / dist
+		ic := Check{Name: CheckInflow, Value: v, Unit: "m/s", Verdict: OK, Point: p.Name}
+		if v > lim.Inflow {
+			ic.Verdict = Warn
+		}
+		t.offer(ic, func(c Check) (reason string) {
+			reason = fmt.Sprintf("%.2f m/s of entrained inflow (Ricou & Spalding 1961) for %s", v, p.Name)
+			if c.Verdict == Warn {
+				reason = fmt.Sprintf("%.2f m/s of air drawn in by the jet of %s (Ricou & Spalding 1961), above %.3g m/s: flow over the microphone adds self-noise; use a nose cone or windscreen, or move it out", v, p.Name, lim.Inflow)
+			}
+			return
+		})
+
+		bc := Check{Name: CheckBuoyancy, Value: 0, Unit: "", Verdict: OK, Point: p.Name}
+		var onset float64
+		dir := "above"
+		if jet.Has(p.Flags, jet.FlagBuoyant) {
+			b := p.Plume.Buoyancy()
+			onset = b.Onset
+			reach := math.Max(p.Velocity().Length, p.Hot().Length)
+			dz := st.Mic.Z - req.Exit.Exit.Z
+			lateral := math.Sqrt(math.Max(0, mic.R*mic.R-dz*dz))
+			rz := math.Max(p.Velocity().Radius(mic.X), p.Hot().Radius(mic.X)) + lim.Margin
+			if b.ReducedGravity < 0 {
+				dir = "below"
+			}
+			if dz*b.ReducedGravity > 0 && mic.X >= b.Onset && mic.X <= reach && lateral <= rz {
+				bc.Value, bc.Verdict = 1, Warn
+			}
+		}
+		t.offer(bc, func(c Check) (reason string) {
+			reason = "not in the reach of a buoyant plume"
+			if c.Verdict == Warn {
+				reason = fmt.Sprintf("%s the jet of %s where buoyancy bends it (beyond %.2f m): the bent plume may reach this station", dir, p.Name, onset)
+			}
+			return
+		})
+	}
+}
+
+// sourceLength returns the longest radiating region over bands, m.
+func sourceLength(bands []acoustics.Band, dj, uj float64) float64 {
+	l := 0.0
+	for _, b := range bands {
+		_, x := acoustics.SourceExtent(b.Centre, dj, uj)
+		l = math.Max(l, x)
+	}
+	return l
+}
+
+// finish orders the checks, sets the station's verdict, governing point
+// and reasons. A check whose value could not be computed blocks the
+// station: it is never reported OK unevaluated.
+func (ck *checker) finish(st *Station, t *tally) {
+	st.Checks = st.Checks[:0]
+	st.Status = OK
+	worst := Check{Verdict: 0}
+	for _, name := range checkNames {
+		c, ok := t.get(name)
+		if !ok {
+			continue
+		}
+		if math.IsNaN(c.Value) && name != CheckGround {
+			c.Verdict = Blocked
+			c.Reason = "could not be evaluated: " + c.Reason
+		}
+		st.Checks = append(st.Checks, c)
+		if c.Verdict > st.Status {
+			st.Status = c.Verdict
+		}
+		if c.Point != "" && c.Verdict > worst.Verdict {
+			worst = c
+		}
+	}
+	st.Governing = worst.Point
+	if worst.Verdict == OK || worst.Point == "" {
+		if v, ok := t.get(CheckVelocity); ok {
+			st.Governing = v.Point
+		}
+	}
+	st.Reasons = st.Reasons[:0]
+	for _, v := range []Verdict{Blocked, Warn} {
+		for _, c := range st.Checks {
+			if c.Verdict == v {
+				st.Reasons = append(st.Reasons, c.Reason)
+			}
+		}
+	}
+}

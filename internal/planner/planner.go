@@ -1,0 +1,405 @@
+package planner
+
+import (
+	"errors"
+	"fmt"
+	"math"
+	"sort"
+	"strings"
+
+	"github.com/paulmach/orb"
+	"gonum.org/v1/gonum/spatial/r3"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/geometry"
+)
+
+// ErrRequest is wrapped by every error about a request the planner cannot
+// plan.
+var ErrRequest = errors.New("planner: bad request")
+
+// New places every station of req, checks each against every operating
+// point and returns the plan. req is not modified.
+func New(req *Request) (*Plan, error) {
+	if err := validate(req); err != nil {
+		return nil, err
+	}
+	lim := req.Limits.withDefaults()
+	points, err := predict(req, lim)
+	if err != nil {
+		return nil, err
+	}
+	plan := &Plan{Request: req, Points: points, Governing: governing(points)}
+
+	atm := acoustics.Atmosphere{Temperature: req.Ambient.Temperature, RelativeHumidity: req.Ambient.Humidity, Pressure: req.Ambient.Pressure}
+	if err := atm.Validate(); err != nil {
+		return nil, fmt.Errorf("%w: ambient: %w", ErrRequest, err)
+	}
+	bands, err := acoustics.ThirdOctaveBands(req.Band.Low, req.Band.High)
+	if err != nil {
+		return nil, fmt.Errorf("%w: band: %w", ErrRequest, err)
+	}
+	ck := &checker{req: req, lim: lim, points: points, atm: atm, bands: bands}
+	ck.c = atm.SpeedOfSound()
+	ck.lambdaLow = acoustics.Wavelength(req.Band.Low, ck.c)
+	if req.Cell.Kind == geometry.Anechoic {
+		ck.quarter = acoustics.QuarterWave(req.Band.Low, ck.c)
+	}
+	ck.alphaHigh = atm.Absorption(req.Band.High)
+	ck.fresnel = make([][]float64, len(points))
+	for k := range points {
+		e := points[k].Exit
+		ck.fresnel[k] = make([]float64, len(bands))
+		for b, band := range bands {
+			_, l := acoustics.SourceExtent(band.Centre, e.FullyExpandedDiameter, e.Velocity)
+			ck.fresnel[k][b] = acoustics.FresnelRadius(l, band.Centre, ck.c)
+		}
+	}
+	ck.order = append(ck.order, plan.Governing)
+	for i := range points {
+		if i != plan.Governing {
+			ck.order = append(ck.order, i)
+		}
+	}
+	for i := range points {
+		if points[i].SourceEnd >= points[indexOf(points, ck.srcPoint)].SourceEnd || ck.srcPoint == "" {
+			ck.srcPoint = points[i].Name
+		}
+	}
+	src := points[indexOf(points, ck.srcPoint)].SourceEnd
+	for _, q := range sourceAxis(req.Exit, src, sightSamples) {
+		ck.sources = append(ck.sources, req.Exit.ToCell(q))
+	}
+
+	// place every array
+	type placedArray struct {
+		res    ArrayResult
+		spots  []spot
+		stand  *Stand
+		centre r3.Vec
+	}
+	placed := make([]placedArray, len(req.Arrays))
+	for ai := range req.Arrays {
+		a := req.Arrays[ai]
+		var stand *Stand
+		if a.Stand != "" {
+			s, ok := req.Stand(a.Stand)
+			if !ok {
+				return nil, fmt.Errorf("%w: array %s: unknown stand %q", ErrRequest, a.Name, a.Stand)
+			}
+			stand = &s
+		}
+		pl := placer{req: req, stand: stand}
+		res := ArrayResult{Name: a.Name, Kind: a.Kind, MinClearPolar: math.NaN(), FarField: [2]float64{math.Inf(1), math.Inf(-1)}}
+		var edge nearLine
+		switch a.Kind {
+		case Arc:
+			res.MaxRadius = ck.roomRadius(pl, &a)
+			if a.AutoRadius {
+				if math.IsInf(res.MaxRadius, 1) {
+					return nil, fmt.Errorf("%w: array %s: radius auto needs a room boundary or site limit to size against", ErrRequest, a.Name)
+				}
+				if res.MaxRadius <= 0 {
+					return nil, fmt.Errorf("%w: array %s: no radius keeps every requested angle inside the room with %.2f m from the boundary", ErrRequest, a.Name, ck.wallNeed())
+				}
+				a.Radius = math.Floor(res.MaxRadius*1000) / 1000
+				res.Auto = true
+			}
+			res.Radius = a.Radius
+		case Ring:
+			res.Radius = a.Radius
+		case Line:
+			res.Radius = a.Offset
+		case NearField:
+			edge = edgeLine(points, a.XFrom, a.XTo)
+			res.Radius = a.Clearance
+			if a.Clearance < lim.Margin {
+				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %.2f m is less than the %.2f m margin: its stations will be blocked", a.Clearance, lim.Margin))
+			}
+			res.Notes = append(res.Notes, fmt.Sprintf("follows the edge of the widest conservative velocity zone: r = %.3f m + %.4f·x, plus %.3f m", edge.r0, edge.slope, a.Clearance))
+		}
+		res.Spec = a
+		res.Centre = pl.centre(&a)
+		sp, notes := pl.spots(&a, a.Radius, edge)
+		res.Notes = append(res.Notes, notes...)
+		placed[ai] = placedArray{res: res, spots: sp, stand: stand, centre: res.Centre}
+	}
+
+	// stations with IDs, channels and stands
+	channel := 0
+	asBuilt := map[string]bool{}
+	for ai := range placed {
+		pa := &placed[ai]
+		a := &pa.res.Spec
+		if a.FirstChannel > 0 {
+			channel = a.FirstChannel - 1
+		}
+		width := max(2, len(fmt.Sprint(len(pa.spots))))
+		for k, s := range pa.spots {
+			st := Station{
+				Array:     a.Name,
+				Kind:      a.Kind,
+				Index:     k + 1,
+				Mic:       s.mic,
+				Stand:     pa.stand,
+				Nominal:   s.nominal,
+				Incidence: a.Incidence,
+			}
+			if st.Incidence == 0 {
+				st.Incidence = NormalIncidence
+			}
+			st.ID = s.name
+			if st.ID == "" {
+				st.ID = fmt.Sprintf("%s-%0*d", a.Name, width, k+1)
+			}
+			if a.Kind != Probes {
+				channel++
+				if s.channel > 0 {
+					channel = s.channel
+				}
+				st.Channel = channel
+			}
+			boom := 0.0
+			if pa.stand != nil {
+				boom = pa.stand.BoomLength
+			}
+			if ab, ok := req.AsBuilt[st.ID]; ok {
+				s.mic, st.Mic = ab.Mic, ab.Mic
+				if pa.stand == nil {
+					s.mic.Z, st.Mic.Z = 0, 0
+				}
+				asBuilt[st.ID] = true
+			}
+			st.Base = standBase(s.mic, pa.centre, boom, req.Exit)
+			if ab, ok := req.AsBuilt[st.ID]; ok && ab.Base != nil {
+				st.Base = *ab.Base
+			}
+			st.Height = s.mic.Z
+			rel := req.Exit.ToJet(s.mic)
+			cx := req.Exit.ToJet(pa.centre).X
+			q := geometry.JetPoint{X: rel.X - cx, R: rel.R}
+			st.Jet = rel
+			st.Radius = q.Distance()
+			st.Polar = req.Convention.FromDownstream(q.Polar())
+			st.AimAt = ck.aimPoint(points)
+			plan.Stations = append(plan.Stations, st)
+		}
+		pa.res.Stations = len(pa.spots)
+	}
+	if err := ck.uniqueIDs(plan.Stations); err != nil {
+		return nil, err
+	}
+	var unknown []string
+	for id := range req.AsBuilt {
+		if !asBuilt[id] {
+			unknown = append(unknown, id)
+		}
+	}
+	if len(unknown) > 0 {
+		sort.Strings(unknown)
+		return nil, fmt.Errorf("%w: as-built positions for stations the layout does not have: %s", ErrRequest, strings.Join(unknown, ", "))
+	}
+
+	// stand footprints and sight-line solids
+	var obst []geometry.Solid
+	obst = append(obst, req.Cell.Solids()...)
+	ck.obstacles = geometry.NewIndex(obst)
+	stands := make([]geometry.Solid, len(plan.Stations))
+	ck.feet = make([]foot, len(plan.Stations))
+	for i := range plan.Stations {
+		st := &plan.Stations[i]
+		r, top := flushRadius, math.Max(st.Mic.Z, flushHeight)
+		if st.Stand != nil {
+			r = math.Max(st.Stand.BaseRadius, st.Stand.PoleDiameter/2)
+		}
+		ck.feet[i] = foot{at: st.Base, r: r}
+		ck.maxFoot = math.Max(ck.maxFoot, r)
+		// for sight lines a stand is its pole and its base
+		sr := r
+		if st.Stand != nil {
+			sr = st.Stand.PoleDiameter / 2
+		}
+		stands[i] = geometry.Solid{Name: st.ID, Footprint: geometry.Circle(st.Base, sr), ZMin: 0, ZMax: top}
+	}
+	ck.stands = geometry.NewIndex(stands)
+
+	// check every station
+	si := 0
+	for ai := range placed {
+		pa := &placed[ai]
+		cx := req.Exit.ToJet(pa.centre).X
+		for range pa.spots {
+			ck.evaluate(&plan.Stations[si], si, &pa.res.Spec, cx)
+			si++
+		}
+	}
+	for i := range plan.Stations {
+		switch plan.Stations[i].Status {
+		case OK:
+			plan.OK++
+		case Warn:
+			plan.Warn++
+		case Blocked:
+			plan.Blocked++
+		}
+	}
+
+	// array summaries
+	for ai := range placed {
+		pa := &placed[ai]
+		ck.summarise(&pa.res, plan)
+		plan.Arrays = append(plan.Arrays, pa.res)
+	}
+	plan.Absorption = ck.absorptionTable(plan.Arrays, plan.Stations)
+	plan.Warnings = ck.warnings(atm)
+	return plan, nil
+}
+
+func indexOf(points []PointResult, name string) int {
+	for i := range points {
+		if points[i].Name == name {
+			return i
+		}
+	}
+	return 0
+}
+
+// aimPoint returns where free-field microphones are aimed: the centre of
+// the source region of the governing point, on the axis at the end of its
+// potential core (acoustics reference sheet §5.2: "aim at the nozzle exit or
+// the estimated source centroid").
+func (ck *checker) aimPoint(points []PointResult) r3.Vec {
+	return ck.req.Exit.ToCell(geometry.JetPoint{X: points[ck.order[0]].CoreNominal})
+}
+
+func (ck *checker) uniqueIDs(st []Station) error {
+	seen := map[string]bool{}
+	for _, s := range st {
+		if seen[s.ID] {
+			return fmt.Errorf("%w: two stations are named %q", ErrRequest, s.ID)
+		}
+		seen[s.ID] = true
+	}
+	return nil
+}
+
+// wallNeed is the clearance from the boundary that the automatic radius
+// keeps: the user's wall clearance and, with treated walls, a quarter
+// wavelength at the band's low end.
+func (ck *checker) wallNeed() float64 { return math.Max(ck.lim.WallClearance, ck.quarter) }
+
+// roomRadius returns the largest radius of arc a at which every requested
+// angle keeps the stand, base and microphone at least wallNeed from the
+// boundary, on or above the floor and below the ceiling; +Inf in an
+// unbounded cell with no ceiling limit.
+func (ck *checker) roomRadius(pl placer, a *Array) float64 {
+	cell := &ck.req.Cell
+	need := ck.wallNeed()
+	poleR, baseR, boom := flushRadius, flushRadius, 0.0
+	if pl.stand != nil {
+		poleR, baseR, boom = pl.stand.PoleDiameter/2, pl.stand.BaseRadius, pl.stand.BoomLength
+	}
+	footR := math.Max(poleR, baseR)
+	centre := pl.centre(a)
+	ok := func(thetaJ, r float64) bool {
+		m := pl.arcPoint(a, thetaJ, r)
+		if m.Z < 0 || m.Z > cell.Ceiling-ck.quarter {
+			return false
+		}
+		if !cell.Bounded() {
+			return true
+		}
+		b := standBase(m, centre, boom, ck.req.Exit)
+		return cell.WallDistance(b)-footR >= need && cell.WallDistance(orb.Point{m.X, m.Y}) >= need
+	}
+	best := math.Inf(1)
+	span := 1e4
+	if cell.Bounded() {
+		e := cell.Extent()
+		span = 2 * math.Hypot(e.Max[0]-e.Min[0], e.Max[1]-e.Min[1])
+	}
+	for _, th := range steps(a.From, a.To, a.Step) {
+		tj := ck.req.Convention.ToDownstream(th)
+		const n = 400
+		lo, hi := 0.0, math.Inf(1)
+		for k := 1; k <= n; k++ {
+			r := span * float64(k) / n
+			if !ok(tj, r) {
+				hi = r
+				break
+			}
+			lo = r
+		}
+		if math.IsInf(hi, 1) {
+			continue
+		}
+		for k := 0; k < 50; k++ {
+			mid := (lo + hi) / 2
+			if ok(tj, mid) {
+				lo = mid
+			} else {
+				hi = mid
+			}
+		}
+		best = math.Min(best, lo)
+	}
+	return best
+}
+
+// validate checks what the planner cannot work without; the layout
+// package validates everything else with file positions.
+func validate(req *Request) error {
+	bad := func(format string, a ...any) error {
+		return fmt.Errorf("%w: "+format, append([]any{ErrRequest}, a...)...)
+	}
+	switch {
+	case req == nil:
+		return bad("no request")
+	case len(req.Points) == 0:
+		return bad("no operating points")
+	case req.Convention != FromInlet && req.Convention != FromJetAxis:
+		return bad("no polar-angle convention")
+	case !(req.Band.Low > 0) || !(req.Band.High > req.Band.Low):
+		return bad("band %g–%g Hz: want 0 < low < high", req.Band.Low, req.Band.High)
+	}
+	for _, a := range req.Arrays {
+		switch a.Kind {
+		case Arc:
+			if !a.AutoRadius && !(a.Radius > 0) {
+				return bad("array %s: radius %g m: want > 0", a.Name, a.Radius)
+			}
+			if !(a.Step > 0) {
+				return bad("array %s: polar step must be > 0", a.Name)
+			}
+		case Line:
+			if !(a.Spacing > 0) && !(a.Step > 0) {
+				return bad("array %s: want a spacing or a polar step > 0", a.Name)
+			}
+		case NearField:
+			if !(a.Spacing > 0) {
+				return bad("array %s: spacing must be > 0", a.Name)
+			}
+		case Ring:
+			if !(a.AzStep > 0) || !(a.Radius > 0) {
+				return bad("array %s: ring radius and azimuth step must be > 0", a.Name)
+			}
+		case Points, Probes:
+			for _, f := range a.Fixed {
+				if !finiteVec(f.At) {
+					return bad("array %s: station %q: position %v is not a finite point", a.Name, f.Name, f.At)
+				}
+			}
+		default:
+			return bad("array %s: unknown kind", a.Name)
+		}
+	}
+	for id, ab := range req.AsBuilt {
+		if !finiteVec(ab.Mic) || (ab.Base != nil && (!finite(ab.Base[0]) || !finite(ab.Base[1]))) {
+			return bad("as-built position of %s is not a finite point", id)
+		}
+	}
+	return nil
+}
+
+func finite(v float64) bool   { return !math.IsNaN(v) && !math.IsInf(v, 0) }
+func finiteVec(v r3.Vec) bool { return finite(v.X) && finite(v.Y) && finite(v.Z) }

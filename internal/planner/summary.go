@@ -1,0 +1,193 @@
+package planner
+
+import (
+	"fmt"
+	"math"
+	"strings"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/jet"
+)
+
+// polarScanStep is the step, rad, of the scan for the polar angle closest
+// to the jet axis that clears the zones (0.25°).
+const polarScanStep = 0.25 * math.Pi / 180
+
+// summarise fills the array's blocked list, its clearest polar angle and
+// its far-field interval.
+func (ck *checker) summarise(res *ArrayResult, plan *Plan) {
+	conv := ck.req.Convention
+	var mine []*Station
+	for i := range plan.Stations {
+		if plan.Stations[i].Array == res.Name {
+			mine = append(mine, &plan.Stations[i])
+		}
+	}
+	// group runs of blocked stations with the same first reason
+	for i := 0; i < len(mine); {
+		s := mine[i]
+		if s.Status != Blocked {
+			i++
+			continue
+		}
+		j := i
+		for j+1 < len(mine) && mine[j+1].Status == Blocked && firstBlock(mine[j+1]) == firstBlock(s) {
+			j++
+		}
+		ids := s.ID
+		if j > i {
+			ids += " to " + mine[j].ID
+		}
+		if !math.IsNaN(s.Nominal) {
+			a, b := s.Nominal*180/math.Pi, mine[j].Nominal*180/math.Pi
+			if j > i {
+				ids += fmt.Sprintf(" (%s %.4g–%.4g°)", conv.Symbol(), a, b)
+			} else {
+				ids += fmt.Sprintf(" (%s %.4g°)", conv.Symbol(), a)
+			}
+		}
+		res.Blocked = append(res.Blocked, ids+": "+s.Reasons[0])
+		i = j + 1
+	}
+	if res.Kind != Arc {
+		res.FarFieldNote = "the far-field interval is given for arcs"
+		return
+	}
+
+	// the polar angle closest to the downstream axis that clears every zone
+	a := res.Spec
+	var stand *Stand
+	if a.Stand != "" {
+		s, _ := ck.req.Stand(a.Stand)
+		stand = &s
+	}
+	pl := placer{req: ck.req, stand: stand}
+	boom := 0.0
+	if stand != nil {
+		boom = stand.BoomLength
+	}
+	for tj := 0.0; tj <= math.Pi+1e-12; tj += polarScanStep {
+		st := Station{Mic: pl.arcPoint(&a, tj, a.Radius), Stand: stand}
+		st.Base = standBase(st.Mic, res.Centre, boom, ck.req.Exit)
+		fixed, bm := ck.hardware(&st)
+		clear := true
+		for k := range ck.points {
+			p := &ck.points[k]
+			if c, _ := zoneClearance(p.Velocity(), fixed, bm, ck.lim.Margin); c < ck.lim.Margin {
+				clear = false
+				break
+			}
+			if c, _ := zoneClearance(p.Hot(), fixed, bm, ck.lim.Margin); c < ck.lim.Margin {
+				clear = false
+				break
+			}
+		}
+		if clear {
+			res.MinClearPolar = conv.FromDownstream(tj)
+			break
+		}
+	}
+
+	// far-field interval: the largest lower bound against the room
+	type bound struct {
+		r    float64
+		what string
+	}
+	var bs []bound
+	dj, need := 0.0, 0.0
+	var needBand acoustics.Band
+	for k := range ck.points {
+		e := ck.points[k].Exit
+		dj = math.Max(dj, e.FullyExpandedDiameter)
+		for _, b := range ck.bands {
+			_, l := acoustics.SourceExtent(b.Centre, e.FullyExpandedDiameter, e.Velocity)
+			if n := acoustics.FresnelRadius(l, b.Centre, ck.c); n > need {
+				need, needBand = n, b
+			}
+		}
+	}
+	bs = append(bs,
+		bound{ck.lim.FarFieldRatio * dj, fmt.Sprintf("R/Dj ≥ %.0f needs %.2f m", ck.lim.FarFieldRatio, ck.lim.FarFieldRatio*dj)},
+		bound{minWavelengths * ck.lambdaLow, fmt.Sprintf("2 wavelengths at %.0f Hz need %.2f m", ck.req.Band.Low, minWavelengths*ck.lambdaLow)},
+		bound{need, fmt.Sprintf("the Fresnel condition at %s needs %.2f m", needBand.Nominal, need)},
+	)
+	lo, why := 0.0, ""
+	var parts []string
+	for _, b := range bs {
+		parts = append(parts, b.what)
+		if b.r > lo {
+			lo, why = b.r, b.what
+		}
+	}
+	res.FarField = [2]float64{lo, res.MaxRadius}
+	room := fmt.Sprintf("the room allows %.2f m", res.MaxRadius)
+	if math.IsInf(res.MaxRadius, 1) {
+		room = "the site sets no upper limit"
+	}
+	if lo > res.MaxRadius {
+		res.FarFieldNote = fmt.Sprintf("empty: %s, but %s (%s)", why, room, strings.Join(parts, "; "))
+	} else {
+		res.FarFieldNote = fmt.Sprintf("set by %s; %s (%s)", why, room, strings.Join(parts, "; "))
+	}
+}
+
+// firstBlock names the first blocking check of a station.
+func firstBlock(s *Station) string {
+	for _, c := range s.Checks {
+		if c.Verdict == Blocked {
+			return c.Name + "/" + c.Point
+		}
+	}
+	return ""
+}
+
+// absorptionTable lists the absorption of every 1/3-octave band over each
+// array's path: the arc radius, or the mean distance of its stations.
+func (ck *checker) absorptionTable(arrays []ArrayResult, stations []Station) []AbsorptionRow {
+	paths := make([]float64, len(arrays))
+	for i, a := range arrays {
+		if a.Kind == Arc {
+			paths[i] = a.Radius
+			continue
+		}
+		n := 0
+		for _, s := range stations {
+			if s.Array == a.Name {
+				paths[i] += s.Radius
+				n++
+			}
+		}
+		if n > 0 {
+			paths[i] /= float64(n)
+		}
+	}
+	rows := make([]AbsorptionRow, len(ck.bands))
+	for i, b := range ck.bands {
+		rows[i] = AbsorptionRow{Band: b, PerM: ck.atm.Absorption(b.Centre), ArrayDB: make([]float64, len(arrays))}
+		for k := range arrays {
+			rows[i].ArrayDB[k] = rows[i].PerM * paths[k]
+		}
+	}
+	return rows
+}
+
+// warnings returns the plan-wide remarks.
+func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
+	var w []string
+	req := ck.req
+	if req.CutOff > 0 && req.Band.Low < req.CutOff {
+		w = append(w, fmt.Sprintf("the band starts at %.0f Hz, below the treatment's cut-off of %.0f Hz: the room is not anechoic at the low end", req.Band.Low, req.CutOff))
+	}
+	w = append(w, atm.Warnings()...)
+	for _, p := range ck.points {
+		for _, f := range p.Flags {
+			if f.Kind == jet.FlagBuoyant || f.Kind == jet.FlagLaminar {
+				w = append(w, p.Name+": "+f.String())
+			}
+		}
+		if p.Capture != OK {
+			w = append(w, fmt.Sprintf("%s: collector capture %s: %s", p.Name, p.Capture, p.CaptureReason))
+		}
+	}
+	return w
+}
