@@ -1,0 +1,77 @@
+// Package export writes a finished plan ([planner.Plan]) as JSON, CSV and
+// GeoJSON, and writes files atomically. It only formats what is in the plan:
+// it predicts, checks and decides nothing.
+//
+// Every value is SI and every key or column that holds a quantity names its
+// unit (x_m, ground_null_hz, velocity_m_s, static_temperature_k). Angles are
+// in degrees in the layout's polar-angle convention, which each output names
+// ("from_jet_axis" or "from_inlet").
+//
+// # Numbers
+//
+// Lengths are rounded to 0.1 mm (4 decimals in metres) and angles to
+// 0.01°; other quantities (Mach and Reynolds numbers, velocities,
+// temperatures, frequencies, decibels, ratios) keep 6 significant digits.
+// The rounding makes the output byte-stable: the same plan gives the same
+// bytes, and the last bits of a floating-point result do not show.
+//
+// A NaN or ±Inf value is written as JSON null and as an empty CSV cell; it
+// means "does not apply" (the floor null of a flush microphone) or "not
+// known". GeoJSON coordinates cannot be null: [GeoJSON] returns an error
+// wrapping [ErrNotFinite] that names the feature instead.
+//
+// # JSON
+//
+// [JSON] writes one indented object: the format name and version, the
+// source file, the title and title block, the polar-angle convention, the
+// governing operating point (null without points), the counts of stations
+// by verdict and the plan's warnings, then "stations", "arrays", "points"
+// and "absorption" lists, in plan order. Keys are written in a fixed order
+// (structs, not maps); an empty list is [], never null.
+//
+// A station gives its microphone (x_m, y_m, z_m), the foot of its stand
+// (base_x_m, base_y_m), height, radius and polar angle, its jet-frame
+// position ("jet": x_m, r_m, azimuth_deg), its kind (arc, line, near_field,
+// ring, points or probes), stand (null for a microphone flush on the floor),
+// aim ("normal" or "grazing") and aim point, status and governing point.
+// Its "checks" object holds the value of each named check, null where the
+// station has no such check or the value is NaN (the floor null of a flush
+// microphone or a treated floor); line_of_sight is true when the whole
+// source region is in view (the check's value is 1) and buoyant_plume when
+// the check's value is 1. "check_details" lists every check with its
+// value, unit, verdict, governing point and reason, and "reasons" the
+// reasons of the checks that are not ok.
+//
+// An array gives its kind, radius, centre, whether the planner chose the
+// radius, the largest radius (arcs only, else null), the clearest polar
+// angle (null if none), the far-field interval of radii [lo, hi] (null when
+// empty) with its note, and its blocked list and notes.
+//
+// A point's potential_core_length_m is the nominal core (tables show
+// nominal values; the conservative one is beside it); its envelope lengths
+// and largest radii are the conservative zones that clearances use. It also
+// gives the fully expanded exit state ("exit"), the regime flags in words,
+// and the collector capture verdict with its reason and the predicted plume
+// diameter at the inlet (null when the cell has no collector).
+//
+// # CSV
+//
+// [CSV] writes the station table for the data system and the technicians:
+// a header row, then one row per station in plan order, metres to 4
+// decimals and degrees to 2.
+//
+// # GeoJSON
+//
+// [GeoJSON] writes a FeatureCollection whose coordinates are the cell frame
+// in metres (planar X and Y from the cell datum, not longitude and
+// latitude), which the foreign member "coordinate_frame" states. Each feature
+// has a "layer" property: boundary, obstacle, keep_out, collector, mark,
+// nozzle, jet_axis, zone, arc, station and stand_base. Polygon rings are
+// closed and counter-clockwise (RFC 7946 §3.1.6).
+//
+// # Files
+//
+// [WriteFile] writes through a temporary file in the target directory and
+// renames it over the target only when everything succeeded, so a failed
+// run leaves no partial output.
+package export

@@ -1,0 +1,218 @@
+package export
+
+import (
+	"fmt"
+	"math"
+
+	"github.com/paulmach/orb"
+	"github.com/paulmach/orb/geojson"
+	"gonum.org/v1/gonum/spatial/r3"
+
+	"arcwright/internal/geometry"
+	"arcwright/internal/jet"
+	"arcwright/internal/planner"
+)
+
+// Drawing resolution.
+const (
+	// circleSides is the number of sides of the polygon that stands for a
+	// disc footprint; its vertices lie on the circle.
+	circleSides = 64
+	// arcStep is the largest angle, rad, that one straight piece of an arc
+	// line spans (1°).
+	arcStep = math.Pi / 180
+	// arcSlack is the fraction of arcStep by which a span may exceed a
+	// whole number of steps, through rounding, without taking an extra
+	// piece.
+	arcSlack = 1e-6
+)
+
+// roundPoint rounds a plan position (m) to 0.1 mm; false when a coordinate
+// is NaN or ±Inf.
+func roundPoint(x, y float64) (orb.Point, bool) {
+	return orb.Point{roundTo(x, lengthDecimals), roundTo(y, lengthDecimals)}, finite(x) && finite(y)
+}
+
+// point returns the rounded Point at (x, y), m.
+func point(x, y float64) (orb.Point, bool) { return roundPoint(x, y) }
+
+// path rounds pts and drops a vertex equal to the one before it.
+func path(pts []orb.Point) (orb.LineString, bool) {
+	out := make(orb.LineString, 0, len(pts))
+	for _, p := range pts {
+		q, ok := roundPoint(p[0], p[1])
+		if !ok {
+			return nil, false
+		}
+		if n := len(out); n > 0 && out[n-1] == q {
+			continue
+		}
+		out = append(out, q)
+	}
+	return out, true
+}
+
+// polygon returns the polygon with outline pts (open or closed, either
+// orientation): rounded, without repeated vertices, closed and
+// counter-clockwise.
+func polygon(pts []orb.Point) (orb.Polygon, bool) {
+	ls, ok := path(pts)
+	if !ok || len(ls) == 0 {
+		return nil, ok
+	}
+	ring := orb.Ring(ls)
+	if ring[len(ring)-1] != ring[0] {
+		ring = append(ring, ring[0])
+	}
+	if ring.Orientation() == orb.CW {
+		ring.Reverse()
+	}
+	return orb.Polygon{ring}, true
+}
+
+// footprint returns a footprint's outline: its ring, or a disc as a
+// 64-gon (a Point for a disc of radius 0).
+func footprint(f geometry.Footprint) (orb.Geometry, bool) {
+	if !f.IsCircle() {
+		return polygon(f.Ring)
+	}
+	if f.Radius == 0 {
+		return point(f.Center[0], f.Center[1])
+	}
+	pts := make([]orb.Point, circleSides)
+	for i := range pts {
+		s, c := math.Sincos(2 * math.Pi * float64(i) / circleSides)
+		pts[i] = orb.Point{f.Center[0] + f.Radius*c, f.Center[1] + f.Radius*s}
+	}
+	return polygon(pts)
+}
+
+// addJet adds the nozzle, the jet axis and the governing point's zones.
+func (c *collection) addJet(p *planner.Plan) {
+	fr := p.Request.Exit
+	g, ok := point(fr.Exit.X, fr.Exit.Y)
+	c.add(layerNozzle, "", g, ok, geojson.Properties{"heading_deg": degrees(fr.Heading), "z_m": metres(fr.Exit.Z)})
+
+	// the axis reaches the end of the longest conservative zone of any point
+	longest, by, zone := 0.0, "", ""
+	for i := range p.Points {
+		pt := &p.Points[i]
+		if pt.Plume == nil {
+			continue
+		}
+		for _, e := range []*jet.Envelope{pt.Velocity(), pt.Hot()} {
+			if e.Length > longest {
+				longest, by, zone = e.Length, pt.Name, zoneName(e.Zone)
+			}
+		}
+	}
+	if longest > 0 {
+		end := fr.ToCell(geometry.JetPoint{X: longest})
+		ls, ok := path([]orb.Point{vec2(fr.Exit), vec2(end)})
+		c.add(layerJetAxis, "", ls, ok, geojson.Properties{"length_m": metres(longest), "point": by, "zone": zone})
+	}
+
+	if len(p.Points) == 0 || p.Points[p.Governing].Plume == nil {
+		return
+	}
+	gov := &p.Points[p.Governing]
+	for _, e := range []*jet.Envelope{gov.Velocity(), gov.Hot()} {
+		if e.Length == 0 || len(e.Points) < 2 {
+			continue // the jet never exceeds this limit: no zone
+		}
+		g, ok := zoneOutline(fr, e)
+		unit := "m/s"
+		if e.Zone == jet.HotZone {
+			unit = "K"
+		}
+		c.add(layerZone, fmt.Sprintf("%s of %q", zoneName(e.Zone), gov.Name), g, ok, geojson.Properties{
+			"zone": zoneName(e.Zone), "point": gov.Name, "variant": e.Variant.String(),
+			"limit": sig(e.Limit), "limit_unit": unit,
+			"length_m": metres(e.Length), "max_radius_m": metres(e.MaxRadius),
+		})
+	}
+}
+
+// zoneName returns "velocity" or "hot".
+func zoneName(z jet.Zone) string {
+	if z == jet.HotZone {
+		return "hot"
+	}
+	return "velocity"
+}
+
+// zoneOutline returns the envelope's outline (x, ±r) in the horizontal plane
+// through the jet axis, in the cell frame: up the left side (r > 0) from the
+// exit to the tip, and back down the right side.
+func zoneOutline(fr geometry.JetFrame, e *jet.Envelope) (orb.Polygon, bool) {
+	n := len(e.Points)
+	pts := make([]orb.Point, 0, 2*n)
+	for _, q := range e.Points {
+		pts = append(pts, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: q[1]})))
+	}
+	for i := n - 1; i >= 0; i-- {
+		q := e.Points[i]
+		pts = append(pts, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: -q[1]})))
+	}
+	return polygon(pts)
+}
+
+// addArcs adds, for each arc array with two or more stations, a line through
+// its microphones in plan order that follows the arc about the array's
+// centre between them.
+func (c *collection) addArcs(p *planner.Plan) {
+	for i := range p.Arrays {
+		a := &p.Arrays[i]
+		if a.Kind != planner.Arc {
+			continue
+		}
+		var mics []r3.Vec
+		for j := range p.Stations {
+			if p.Stations[j].Array == a.Name {
+				mics = append(mics, p.Stations[j].Mic)
+			}
+		}
+		if len(mics) < 2 {
+			continue
+		}
+		pts := []orb.Point{vec2(mics[0])}
+		for j := 1; j < len(mics); j++ {
+			pts = append(pts, arcPieces(a.Centre, mics[j-1], mics[j])...)
+		}
+		ls, ok := path(pts)
+		c.add(layerArc, fmt.Sprintf("%q", a.Name), ls, ok, geojson.Properties{
+			"array": a.Name, "radius_m": metres(a.Radius), "centre_x_m": metres(a.Centre.X), "centre_y_m": metres(a.Centre.Y),
+		})
+	}
+}
+
+// arcPieces returns the plan positions along the arc about centre from a
+// (excluded) to b (included), in pieces of at most arcStep: the shorter
+// great-circle arc between the two directions, with the distance from the
+// centre changing linearly. Stations on one arc lie in one plane through its
+// centre, so this is the arc itself; where the directions are opposite or a
+// point is at the centre, the straight segment is used.
+func arcPieces(centre, a, b r3.Vec) []orb.Point {
+	u, v := r3.Sub(a, centre), r3.Sub(b, centre)
+	lu, lv := r3.Norm(u), r3.Norm(v)
+	omega := 0.0
+	if lu > 0 && lv > 0 {
+		omega = math.Acos(math.Max(-1, math.Min(1, r3.Dot(u, v)/(lu*lv))))
+	}
+	n := max(1, int(math.Ceil(omega/arcStep-arcSlack)))
+	out := make([]orb.Point, 0, n)
+	so := math.Sin(omega)
+	for k := 1; k <= n; k++ {
+		t := float64(k) / float64(n)
+		var q r3.Vec
+		if k == n || so == 0 || lu == 0 || lv == 0 {
+			q = r3.Add(u, r3.Scale(t, r3.Sub(v, u))) // straight, and exactly b at the end
+		} else {
+			wa, wb := math.Sin((1-t)*omega)/so, math.Sin(t*omega)/so
+			dir := r3.Add(r3.Scale(wa/lu, u), r3.Scale(wb/lv, v))
+			q = r3.Scale(lu+t*(lv-lu), dir)
+		}
+		out = append(out, vec2(r3.Add(centre, q)))
+	}
+	return out
+}
