@@ -109,7 +109,7 @@ func (f *field) planeUc(x float64) float64 {
 		// Bickley 1937: um/U0 = 0.45428·(Re·b/x)^(1/3)
 		return f.uj * math.Min(1, laminarPlaneDecay*math.Cbrt(f.reH*f.planeB/x))
 	}
-	return f.uj * math.Min(1, f.m.PlaneK*math.Sqrt(f.planeB/x))
+	return NewPlaneJet(f.uj, f.planeB, f.m).Centerline(x)
 }
 
 // thetac returns the centreline excess total temperature as a fraction of
