@@ -232,7 +232,7 @@ func catchUp(near, far func(float64) float64, end float64) float64 {
 			return 0
 		}
 		lo, hi := prev, x
-		for k := 0; k < 60; k++ {
+		for k := 0; k < 60 && hi-lo > 1e-10*hi; k++ {
 			mid := (lo + hi) / 2
 			if near(mid) > far(mid) {
 				lo = mid

@@ -293,3 +293,22 @@ func (r *Request) Stand(name string) (Stand, bool) {
 func (a Ambient) JetAmbient() jet.Ambient {
 	return jet.Ambient{Pressure: a.Pressure, Temperature: a.Temperature}
 }
+
+// Count returns the number of stations the array asks for, before ring
+// azimuths outside the room are left out.
+func (a Array) Count() int {
+	switch a.Kind {
+	case Arc:
+		return len(steps(a.From, a.To, a.Step))
+	case Line:
+		if a.Spacing > 0 {
+			return len(steps(a.XFrom, a.XTo, a.Spacing))
+		}
+		return len(steps(a.From, a.To, a.Step))
+	case NearField:
+		return len(steps(a.XFrom, a.XTo, a.Spacing))
+	case Ring:
+		return len(steps(a.AzFrom, a.AzTo, a.AzStep))
+	}
+	return len(a.Fixed)
+}
