@@ -60,7 +60,7 @@ func TestFlags(t *testing.T) {
 		{"under-expanded", Nozzle{Kind: Convergent, Diameter: 0.05}, cold(3), FlagShock, "shock cells about"},
 		{"Mach disk", Nozzle{Kind: Convergent, Diameter: 0.05}, cold(6), FlagShock, "Mach disk"},
 		{"shock in nozzle", Nozzle{Kind: ConvergentDivergent, Diameter: 0.05, DesignMach: 1.5}, cold(1.4), FlagShock, "normal shock stands inside"},
-		{"hot slow", Nozzle{Kind: Convergent, Diameter: 1}, Condition{Primary: Stream{NPR: 1.015, TotalTemperature: 500}, Ambient: amb}, FlagBuoyant, "bends up"},
+		{"hot slow", Nozzle{Kind: Convergent, Diameter: 1}, Condition{Primary: Stream{NPR: 1.015, TotalTemperature: 500}, Ambient: amb}, FlagBuoyant, "bend the jet up"},
 		{"outside Lau", Nozzle{Kind: Convergent, Diameter: 0.05}, cold(10), FlagOutsideFit, "outside the 0.28–1.37"},
 		{"very hot", Nozzle{Kind: Convergent, Diameter: 0.05}, Condition{Primary: Stream{NPR: 1.5, TotalTemperature: 1600}, Ambient: amb}, FlagOutsideFit, "density ratio"},
 		{"rectangular", RectangularFromAspect(0.05, 4, 0), cold(1.5), FlagGeometry, "circumscribing"},
