@@ -93,5 +93,5 @@ func ExampleSourceOffset() {
 	fmt.Printf("1 kHz source at %.1f D, %.1f D long; true distance %.1f D at %.1f°, error %+.2f dB\n",
 		xs/dj, length/dj, r/dj, theta*180/math.Pi, errDB)
 	// Output:
-	// 1 kHz source at 7.9 D, 20.0 D long; true distance 93.2 D at 32.4°, error +0.61 dB
+	// 1 kHz source at 7.9 D, 11.8 D long; true distance 93.2 D at 32.4°, error +0.61 dB
 }

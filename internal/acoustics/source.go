@@ -12,7 +12,7 @@ const (
 	sourceMinD       = 1.0  // lower clamp of xs/dj
 	sourceMaxD       = 15.0 // upper clamp of xs/dj
 	sourceLengthMaxD = 20.0 // upper clamp of L/dj
-	sourceCompactD   = 4.0  // L·St/dj: the radiating region shrinks as 1/St
+	sourceCompactD   = 2.0  // L·St/dj: the radiating region shrinks as 1/St
 )
 
 // SourceExtent returns, for a jet of fully expanded diameter dj (m) and
@@ -24,7 +24,7 @@ const (
 // With the Strouhal number St = f·dj/uj,
 //
 //	xs/dj = 2 + 1/St, clamped to [1, 15]
-//	L/dj  = 4/St,     clamped to at most 20
+//	L/dj  = 2/St,     clamped to at most 20
 //
 // It is fitted to the literature ranges quoted in acoustics.md §6.4 (FROM
 // MEMORY, medium confidence, phased-array and polar-correlation studies):
@@ -34,8 +34,9 @@ const (
 // about 10–20 D (L is capped at 20 D). The length falls as 1/St so that
 // high-frequency sources are compact near the nozzle, as acoustics.md §2.1
 // asks of a frequency-dependent Fresnel test: the bands near the spectral
-// peak (St ≈ 0.2) radiate from the whole 20 D region, St = 1 from about
-// 4 D, St = 10 from 0.4 D. Baars, Murray & Tinney (J. Fluid Mech., 2021)
+// peak (St ≈ 0.2) radiate from about 10 D (the 5–12 D span above), the
+// lowest (St ≤ 0.1) from the whole 20 D region, St = 1 from 2 D, St = 10
+// from 0.2 D. Baars, Murray & Tinney (J. Fluid Mech., 2021)
 // confirm that the source position depends on frequency but are not the
 // source of these numbers.
 //

@@ -8,18 +8,18 @@ import (
 
 func TestSourceExtentCheck(t *testing.T) {
 	// Hand-computed check of the SUGGESTION model: 50.8 mm, 300 m/s, 10 kHz
-	// gives St = 1.693, xs = 2 + 1/St = 2.591 D and L = 4/St = 2.362 D; at
-	// 1 kHz (St = 0.169) L reaches the 20 D cap.
+	// gives St = 1.693, xs = 2 + 1/St = 2.591 D and L = 2/St = 1.181 D; at
+	// 500 Hz (St = 0.0847) L reaches the 20 D cap.
 	const dj = 0.0508
 	xs, l := SourceExtent(10e3, dj, 300)
-	if !withinAbs(l/dj, 2.362, printed(3)) {
-		t.Errorf("got L = %.4f D, want 2.362 D", l/dj)
+	if !withinAbs(l/dj, 1.181, printed(3)) {
+		t.Errorf("got L = %.4f D, want 1.181 D", l/dj)
 	}
 	if !withinAbs(xs/dj, 2.591, printed(3)) {
 		t.Errorf("got xs = %.4f D, want 2.591 D", xs/dj)
 	}
-	if _, l := SourceExtent(1e3, dj, 300); l/dj != 20 {
-		t.Errorf("1 kHz: got L = %.4f D, want the 20 D cap", l/dj)
+	if _, l := SourceExtent(500, dj, 300); l/dj != 20 {
+		t.Errorf("500 Hz: got L = %.4f D, want the 20 D cap", l/dj)
 	}
 }
 
