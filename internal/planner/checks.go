@@ -11,6 +11,7 @@ import (
 	"arcwright/internal/acoustics"
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
+	"arcwright/internal/units"
 )
 
 // Thresholds of the acoustic checks.
@@ -131,6 +132,23 @@ type checker struct {
 	fresnel   [][]float64 // L²/λ per point and band, m
 }
 
+// m prints a length in the layout's units, to about three figures.
+func (ck *checker) m(x float64) string { return units.FormatLengthApprox(x, ck.req.System()) }
+
+// v prints a velocity in the layout's units.
+func (ck *checker) v(x float64) string { return units.FormatVelocity(x, ck.req.System()) }
+
+// t prints a temperature in the layout's units.
+func (ck *checker) t(x float64) string { return units.FormatTemperature(x, ck.req.System()) }
+
+// room names the cell: a room, or the site of an outdoor pad.
+func (ck *checker) room() string {
+	if ck.req.Cell.Kind == geometry.OutdoorPad {
+		return "site"
+	}
+	return "room"
+}
+
 // foot is a stand's plan footprint.
 type foot struct {
 	at orb.Point
@@ -218,8 +236,8 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 			best *float64
 			what func() string
 		}{
-			{CheckVelocity, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %.3g m/s)", lim.Velocity) }},
-			{CheckHot, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %.0f °C)", lim.Temperature-273.15) }},
+			{CheckVelocity, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %s)", ck.v(lim.Velocity)) }},
+			{CheckHot, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %s)", ck.t(lim.Temperature)) }},
 		} {
 			c, part := zoneClearance(z.env, fixed, boom, *z.best)
 			if _, seen := t.get(z.name); seen && c >= *z.best {
@@ -236,11 +254,11 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 				case math.IsInf(c, 1):
 					reason = "no " + what() + " at this point"
 				case c < 0:
-					reason = fmt.Sprintf("%s inside the %s of %s, %.2f m deep", part, what(), p.Name, -c)
+					reason = fmt.Sprintf("%s inside the %s of %s, %s deep", part, what(), p.Name, ck.m(-c))
 				case c < lim.Margin:
-					reason = fmt.Sprintf("%s %.2f m from the %s of %s; the margin is %.2f m", part, c, what(), p.Name, lim.Margin)
+					reason = fmt.Sprintf("%s %s from the %s of %s; the margin is %s", part, ck.m(c), what(), p.Name, ck.m(lim.Margin))
 				default:
-					reason = fmt.Sprintf("%.2f m clear of the %s of %s", c, what(), p.Name)
+					reason = fmt.Sprintf("%s clear of the %s of %s", ck.m(c), what(), p.Name)
 				}
 				return
 			})
@@ -262,15 +280,15 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		wc.Reason = "open site: no boundary"
 	case wall < 0:
 		wc.Verdict = Blocked
-		wc.Reason = fmt.Sprintf("outside the room or crossing its boundary by %.2f m", -wall)
+		wc.Reason = fmt.Sprintf("outside the %s or crossing its boundary by %s", ck.room(), ck.m(-wall))
 	case wall < lim.WallClearance:
 		wc.Verdict = Blocked
-		wc.Reason = fmt.Sprintf("%.2f m from the boundary; the layout asks %.2f m", wall, lim.WallClearance)
+		wc.Reason = fmt.Sprintf("%s from the boundary; the layout asks %s", ck.m(wall), ck.m(lim.WallClearance))
 	case wall < ck.quarter:
 		wc.Verdict = Warn
-		wc.Reason = fmt.Sprintf("%.2f m from the wedge tips, less than a quarter wavelength (%.2f m) at %.0f Hz: reflections from the treatment (common practice)", wall, ck.quarter, ck.req.Band.Low)
+		wc.Reason = fmt.Sprintf("%s from the wedge tips, less than a quarter wavelength (%s) at %.0f Hz: reflections from the treatment (common practice)", ck.m(wall), ck.m(ck.quarter), ck.req.Band.Low)
 	default:
-		wc.Reason = fmt.Sprintf("%.2f m from the boundary", wall)
+		wc.Reason = fmt.Sprintf("%s from the boundary", ck.m(wall))
 	}
 	t.add(wc)
 
@@ -286,12 +304,12 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		oc.Reason = "no obstacle near"
 	case obst < 0:
 		oc.Verdict = Blocked
-		oc.Reason = fmt.Sprintf("overlaps %s by %.2f m", oname, -obst)
+		oc.Reason = fmt.Sprintf("overlaps %s by %s", oname, ck.m(-obst))
 	case obst < lim.StandSpacing:
 		oc.Verdict = Warn
-		oc.Reason = fmt.Sprintf("%.2f m from %s", obst, oname)
+		oc.Reason = fmt.Sprintf("%s from %s", ck.m(obst), oname)
 	default:
-		oc.Reason = fmt.Sprintf("%.2f m from %s", obst, oname)
+		oc.Reason = fmt.Sprintf("%s from %s", ck.m(obst), oname)
 	}
 	t.add(oc)
 
@@ -309,7 +327,7 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		kc.Verdict = Blocked
 		kc.Reason = fmt.Sprintf("in the keep-out zone %s", kname)
 	default:
-		kc.Reason = fmt.Sprintf("%.2f m from the keep-out zone %s", ko, kname)
+		kc.Reason = fmt.Sprintf("%s from the keep-out zone %s", ck.m(ko), kname)
 	}
 	t.add(kc)
 
@@ -318,18 +336,18 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	switch {
 	case h < -1e-9:
 		hc.Verdict = Blocked
-		hc.Reason = fmt.Sprintf("%.2f m below the floor", -h)
+		hc.Reason = fmt.Sprintf("%s below the floor", ck.m(-h))
 	case h > cell.Ceiling:
 		hc.Verdict = Blocked
-		hc.Reason = fmt.Sprintf("%.2f m above the ceiling", h-cell.Ceiling)
+		hc.Reason = fmt.Sprintf("%s above the ceiling", ck.m(h-cell.Ceiling))
 	case cell.Kind == geometry.Anechoic && cell.Ceiling-h < ck.quarter:
 		hc.Verdict = Warn
-		hc.Reason = fmt.Sprintf("%.2f m below the ceiling treatment, less than a quarter wavelength at %.0f Hz", cell.Ceiling-h, ck.req.Band.Low)
+		hc.Reason = fmt.Sprintf("%s below the ceiling treatment, less than a quarter wavelength at %.0f Hz", ck.m(cell.Ceiling-h), ck.req.Band.Low)
 	case math.IsInf(cell.Ceiling, 1):
 		hc.Value = h
-		hc.Reason = fmt.Sprintf("%.2f m above the floor, open sky", h)
+		hc.Reason = fmt.Sprintf("%s above the floor, open sky", ck.m(h))
 	default:
-		hc.Reason = fmt.Sprintf("%.2f m above the floor, %.2f m below the ceiling", h, cell.Ceiling-h)
+		hc.Reason = fmt.Sprintf("%s above the floor, %s below the ceiling", ck.m(h), ck.m(cell.Ceiling-h))
 	}
 	t.add(hc)
 
@@ -367,19 +385,19 @@ func (ck *checker) spacing(st *Station, i int) Check {
 	}
 	c := Check{Name: CheckSpacing, Value: best, Unit: "m", Verdict: OK}
 	if who < 0 {
-		c.Reason = fmt.Sprintf("no other stand within %.2f m", ck.lim.StandSpacing)
+		c.Reason = fmt.Sprintf("no other stand within %s", ck.m(ck.lim.StandSpacing))
 		return c
 	}
 	other := ck.stands.Solid(who).Name
 	switch {
 	case best < 0:
 		c.Verdict = Blocked
-		c.Reason = fmt.Sprintf("overlaps the stand of %s by %.2f m", other, -best)
+		c.Reason = fmt.Sprintf("overlaps the stand of %s by %s", other, ck.m(-best))
 	case best < ck.lim.StandSpacing:
 		c.Verdict = Warn
-		c.Reason = fmt.Sprintf("%.2f m from the stand of %s; the layout asks %.2f m", best, other, ck.lim.StandSpacing)
+		c.Reason = fmt.Sprintf("%s from the stand of %s; the layout asks %s", ck.m(best), other, ck.m(ck.lim.StandSpacing))
 	default:
-		c.Reason = fmt.Sprintf("%.2f m from the stand of %s", best, other)
+		c.Reason = fmt.Sprintf("%s from the stand of %s", ck.m(best), other)
 	}
 	return c
 }
@@ -450,7 +468,7 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 
 	ab := ck.alphaHigh * r
 	ac := Check{Name: CheckAbsorption, Value: ab, Unit: "dB", Verdict: OK,
-		Reason: fmt.Sprintf("%.2f dB of air absorption at %.3g kHz over %.2f m (ISO 9613-1)", ab, band.High/1000, r)}
+		Reason: fmt.Sprintf("%.2f dB of air absorption at %s over %s (ISO 9613-1)", ab, units.FormatFrequency(band.High), ck.m(r))}
 	if ab > lim.Absorption {
 		ac.Verdict = Warn
 		ac.Reason += fmt.Sprintf(", above the %.3g dB the layout allows: correct the spectra to lossless", lim.Absorption)
@@ -502,7 +520,7 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 			if last > first {
 				span = "bands " + span + " to " + ck.bands[last].Nominal
 			}
-			reason = fmt.Sprintf("the Fresnel condition R ≥ L²/λ fails at %s for %s: the source region (up to %.2f m long there) is not compact seen from %.2f m; it needs %.2f m", span, p.Name, sourceLength(ck.bands[first:last+1], dj, e.Velocity), r, need)
+			reason = fmt.Sprintf("the Fresnel condition R ≥ L²/λ fails at %s for %s: the source region (up to %s long there) is not compact seen from %s; it needs %s", span, p.Name, ck.m(sourceLength(ck.bands[first:last+1], dj, e.Velocity)), ck.m(r), ck.m(need))
 			return
 		})
 
@@ -517,7 +535,7 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 			dth := (thTrue - q.Polar()) * 180 / math.Pi
 			reason = fmt.Sprintf("%+.2f dB, %+.1f° from a source at the end of the core of %s", lerr, dth, p.Name)
 			if c.Verdict == Warn {
-				reason = fmt.Sprintf("treating the source as at the array centre errs by %+.2f dB and %+.1f° for %s (source near the end of the core, %.2f m downstream)", lerr, dth, p.Name, p.CoreNominal)
+				reason = fmt.Sprintf("treating the source as at the array centre errs by %+.2f dB and %+.1f° for %s (source near the end of the core, %s downstream)", lerr, dth, p.Name, ck.m(p.CoreNominal))
 			}
 			return
 		})
@@ -550,7 +568,7 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 					return
 				}
 				hmax := ck.c * d / (4 * hs * band.High)
-				reason = fmt.Sprintf("floor-reflection null at %.0f Hz inside the band (source %.2f m, microphone %.2f m high, %.2f m apart): use a ground-plane microphone, or lower it below about %.3f m to move the first null above %.3g kHz", fnull, hs, st.Mic.Z, d, hmax, band.High/1000)
+				reason = fmt.Sprintf("floor-reflection null at %.0f Hz inside the band (source %s, microphone %s high, %s apart): use a ground-plane microphone, or lower it below about %s to move the first null above %s", fnull, ck.m(hs), ck.m(st.Mic.Z), ck.m(d), ck.m(hmax), units.FormatFrequency(band.High))
 				return
 			})
 		}
@@ -565,9 +583,9 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 			ic.Verdict = Warn
 		}
 		t.offer(ic, func(c Check) (reason string) {
-			reason = fmt.Sprintf("%.2f m/s of entrained inflow (Ricou & Spalding 1961) for %s", v, p.Name)
+			reason = fmt.Sprintf("%s of entrained inflow (Ricou & Spalding 1961) for %s", ck.v(v), p.Name)
 			if c.Verdict == Warn {
-				reason = fmt.Sprintf("%.2f m/s of air drawn in by the jet of %s (Ricou & Spalding 1961), above %.3g m/s: flow over the microphone adds self-noise; use a nose cone or windscreen, or move it out", v, p.Name, lim.Inflow)
+				reason = fmt.Sprintf("%s of air drawn in by the jet of %s (Ricou & Spalding 1961), above %s: flow over the microphone adds self-noise; use a nose cone or windscreen, or move it out", ck.v(v), p.Name, ck.v(lim.Inflow))
 			}
 			return
 		})
@@ -592,7 +610,7 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 		t.offer(bc, func(c Check) (reason string) {
 			reason = "not in the reach of a buoyant plume"
 			if c.Verdict == Warn {
-				reason = fmt.Sprintf("%s the jet of %s where buoyancy bends it (beyond %.2f m): the bent plume may reach this station", dir, p.Name, onset)
+				reason = fmt.Sprintf("%s the jet of %s where buoyancy bends it (beyond %s): the bent plume may reach this station", dir, p.Name, ck.m(onset))
 			}
 			return
 		})

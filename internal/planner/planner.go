@@ -100,7 +100,7 @@ func New(req *Request) (*Plan, error) {
 					return nil, fmt.Errorf("%w: array %s: radius auto needs a room boundary or site limit to size against", ErrRequest, a.Name)
 				}
 				if res.MaxRadius <= 0 {
-					return nil, fmt.Errorf("%w: array %s: no radius keeps every requested angle inside the room with %.2f m from the boundary", ErrRequest, a.Name, ck.wallNeed())
+					return nil, fmt.Errorf("%w: array %s: no radius keeps every requested angle inside the %s with %s from the boundary", ErrRequest, a.Name, ck.room(), ck.m(ck.wallNeed()))
 				}
 				a.Radius = math.Floor(res.MaxRadius*1000) / 1000
 				res.Auto = true
@@ -114,9 +114,9 @@ func New(req *Request) (*Plan, error) {
 			edge = edgeLine(points, a.XFrom, a.XTo)
 			res.Radius = a.Clearance
 			if a.Clearance < lim.Margin {
-				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %.2f m is less than the %.2f m margin: its stations will be blocked", a.Clearance, lim.Margin))
+				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %s is less than the %s margin: its stations will be blocked", ck.m(a.Clearance), ck.m(lim.Margin)))
 			}
-			res.Notes = append(res.Notes, fmt.Sprintf("follows the edge of the widest conservative velocity zone: r = %.3f m + %.4f·x, plus %.3f m", edge.r0, edge.slope, a.Clearance))
+			res.Notes = append(res.Notes, fmt.Sprintf("follows the edge of the widest conservative velocity zone (%s at the lip, spreading at %.1f° from the axis) at %s", ck.m(edge.r0), math.Atan(edge.slope)*180/math.Pi, ck.m(a.Clearance)))
 		}
 		res.Spec = a
 		res.Centre = pl.centre(&a)

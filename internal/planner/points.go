@@ -7,6 +7,7 @@ import (
 	"arcwright/internal/acoustics"
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
+	"arcwright/internal/units"
 )
 
 // plumeEdgeFraction is the velocity, as a fraction of the centreline value,
@@ -54,9 +55,10 @@ func capture(req *Request, p *PointResult) (Verdict, string, float64) {
 	if col == nil {
 		return OK, "no exhaust collector in the layout", 0
 	}
+	m := func(x float64) string { return units.FormatLengthApprox(x, req.System()) }
 	q := req.Exit.ToJet(col.Inlet)
 	if q.X <= 0 {
-		return Blocked, fmt.Sprintf("the collector inlet is %.3g m upstream of the nozzle exit", -q.X), 0
+		return Blocked, fmt.Sprintf("the collector inlet is %s upstream of the nozzle exit", m(-q.X)), 0
 	}
 	// the nominal 5 % edge of the Gaussian profile: rc + w·sqrt(ln 20/ln 2)
 	half := p.Plume.HalfVelocityRadius(q.X)
@@ -65,9 +67,9 @@ func capture(req *Request, p *PointResult) (Verdict, string, float64) {
 	d := 2 * edge
 	need := 2 * (edge + q.R) // the inlet centre may sit off the axis
 	ratio := need / col.Diameter
-	desc := fmt.Sprintf("plume %.3g m wide (5 %% velocity edge) at the inlet %.3g m downstream, collector %.3g m", d, q.X, col.Diameter)
+	desc := fmt.Sprintf("plume %s wide (5 %% velocity edge) at the inlet %s downstream, collector %s", m(d), m(q.X), m(col.Diameter))
 	if q.R > 0.001 {
-		desc += fmt.Sprintf(", inlet %.3g m off the axis", q.R)
+		desc += fmt.Sprintf(", inlet %s off the axis", m(q.R))
 	}
 	switch {
 	case ratio <= 1:

@@ -279,6 +279,15 @@ type Placement struct {
 	Base *orb.Point // stand pole in plan, m; nil: derived from Mic as planned
 }
 
+// System returns the units to print lengths in; the zero Units means
+// metric.
+func (r *Request) System() units.System {
+	if r.Units == units.Imperial {
+		return units.Imperial
+	}
+	return units.Metric
+}
+
 // Stand returns the stand type named name.
 func (r *Request) Stand(name string) (Stand, bool) {
 	for _, s := range r.Stands {

@@ -107,9 +107,9 @@ func (ck *checker) summarise(res *ArrayResult, plan *Plan) {
 		}
 	}
 	bs = append(bs,
-		bound{ck.lim.FarFieldRatio * dj, fmt.Sprintf("R/Dj ≥ %.0f needs %.2f m", ck.lim.FarFieldRatio, ck.lim.FarFieldRatio*dj)},
-		bound{minWavelengths * ck.lambdaLow, fmt.Sprintf("2 wavelengths at %.0f Hz need %.2f m", ck.req.Band.Low, minWavelengths*ck.lambdaLow)},
-		bound{need, fmt.Sprintf("the Fresnel condition at %s needs %.2f m", needBand.Nominal, need)},
+		bound{ck.lim.FarFieldRatio * dj, fmt.Sprintf("R/Dj ≥ %.0f needs %s", ck.lim.FarFieldRatio, ck.m(ck.lim.FarFieldRatio*dj))},
+		bound{minWavelengths * ck.lambdaLow, fmt.Sprintf("2 wavelengths at %.0f Hz need %s", ck.req.Band.Low, ck.m(minWavelengths*ck.lambdaLow))},
+		bound{need, fmt.Sprintf("the Fresnel condition at %s needs %s", needBand.Nominal, ck.m(need))},
 	)
 	lo, why := 0.0, ""
 	var parts []string
@@ -120,7 +120,7 @@ func (ck *checker) summarise(res *ArrayResult, plan *Plan) {
 		}
 	}
 	res.FarField = [2]float64{lo, res.MaxRadius}
-	room := fmt.Sprintf("the room allows %.2f m", res.MaxRadius)
+	room := fmt.Sprintf("the %s allows %s", ck.room(), ck.m(res.MaxRadius))
 	if math.IsInf(res.MaxRadius, 1) {
 		room = "the site sets no upper limit"
 	}
