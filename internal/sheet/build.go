@@ -1,0 +1,244 @@
+package sheet
+
+import (
+	"fmt"
+	"io"
+	"sort"
+	"strings"
+	"time"
+
+	"arcwright/internal/planner"
+)
+
+// Sheet layout, mm. The drawing border keeps 20 mm at the left for filing
+// and 10 mm elsewhere (ISO 5457, acoustics.md §8.3, FROM MEMORY).
+const (
+	marginLeft  = 20.0
+	marginOther = 10.0
+	titleH      = 52.0 // title block height
+	stripH      = 15.0 // strip under the plan view for the scale bar and caption
+	viewPad     = 10.0 // space inside a view frame kept clear of the drawing, for grid labels and labels
+	gapMM       = 3.0  // gap between panels
+)
+
+// Font sizes, pt.
+const (
+	sizeID      = 5.5 // station IDs on the plan
+	sizeNumber  = 4.5 // key numbers on the plan
+	sizeSmall   = 5.0 // grid labels, angle labels, callouts
+	sizeBody    = 6.5 // panels and set-up steps
+	sizeTable   = 6.0 // tables
+	sizeHeading = 8.5 // section headings
+	sizeCaution = 11  // the CAUTION heading
+)
+
+// builder holds what Build works with.
+type builder struct {
+	plan  *planner.Plan
+	req   *planner.Request
+	gov   *planner.PointResult
+	lim   planner.Limits
+	pr    printer
+	m     *meter
+	model *Model
+
+	frame   Rect // drawing border
+	colW    float64
+	byArray map[string][]*planner.Station
+
+	gridStep  float64 // plan grid spacing, m
+	keyPlaced bool    // the label key is on sheet 1
+	zs        zoneSet // the zones drawn
+	ranges    string  // the first range label on the plan, "" if none
+}
+
+// Build lays out the sheet set of plan p: pages, scale, every drawn item's
+// position in mm, label placement, and tables split across pages. It reads
+// the plan and does not change it.
+//
+// It returns an error wrapping [ErrUnknownPaper] for an unknown paper,
+// [ErrScale] for a scale that is not positive or does not fit (naming the
+// option and the scale that would fit), and [ErrInvalidPlan] when the plan
+// misses a part or holds a NaN or infinite number where one is printed.
+func Build(p *planner.Plan, opt Options) (*Model, error) {
+	if err := validate(p); err != nil {
+		return nil, err
+	}
+	req := p.Request
+	paper, err := resolvePaper(opt, req)
+	if err != nil {
+		return nil, err
+	}
+	asked, field, err := resolveScale(opt, req)
+	if err != nil {
+		return nil, err
+	}
+	b := &builder{
+		plan: p, req: req, gov: &p.Points[p.Governing], lim: limits(req.Limits),
+		pr: printer{sys: req.Units, conv: req.Convention}, m: newMeter(),
+		model: &Model{Paper: paper},
+	}
+	b.frame = Rect{marginLeft, marginOther, paper.Width - marginLeft - marginOther, paper.Height - 2*marginOther}
+	b.colW = clamp(0.27*b.frame.W, 92, 112)
+	b.byArray = make(map[string][]*planner.Station)
+	for i := range p.Stations {
+		s := &p.Stations[i]
+		b.byArray[s.Array] = append(b.byArray[s.Array], s)
+	}
+	for _, ss := range b.byArray {
+		sort.SliceStable(ss, func(i, j int) bool { return ss[i].Index < ss[j].Index })
+	}
+	b.dates(opt)
+	m := b.model
+	m.Units = req.Units.String()
+	m.Convention = b.pr.convention()
+	m.Governing = b.gov.Name
+	m.Title = clean(req.Title.Title)
+
+	b.zs = b.zones()
+	if err := b.planPage(asked, field); err != nil {
+		return nil, err
+	}
+	b.continuation()
+	b.finish()
+	return m, nil
+}
+
+// Write lays out the sheet set of p and writes it as PDF to w: [Build]
+// followed by [Model.Render].
+func Write(w io.Writer, p *planner.Plan, opt Options) error {
+	m, err := Build(p, opt)
+	if err != nil {
+		return err
+	}
+	return m.Render(w)
+}
+
+// issueLayouts are the date layouts read from the title block's date for the
+// PDF's creation date.
+var issueLayouts = []string{"2006-01-02", "2006/01/02", "02.01.2006", "2 Jan 2006", "2 January 2006", "January 2, 2006", "Jan 2, 2006"}
+
+// dates sets the issue date printed and the PDF's fixed creation date: the
+// title block's date when it parses, else the clock's date, at 00:00 UTC.
+func (b *builder) dates(opt Options) {
+	now := opt.Now
+	if now == nil {
+		now = time.Now
+	}
+	given := strings.TrimSpace(b.req.Title.Date)
+	if given != "" {
+		b.model.IssueDate = clean(given)
+		for _, l := range issueLayouts {
+			if t, err := time.Parse(l, given); err == nil {
+				b.model.Created = time.Date(t.Year(), t.Month(), t.Day(), 0, 0, 0, 0, time.UTC)
+				return
+			}
+		}
+	}
+	t := now()
+	b.model.Created = time.Date(t.Year(), t.Month(), t.Day(), 0, 0, 0, 0, time.UTC)
+	if given == "" {
+		b.model.IssueDate = b.model.Created.Format("2006-01-02")
+	}
+}
+
+// finish numbers the pages and draws the frame and title block on each.
+func (b *builder) finish() {
+	n := len(b.model.Pages)
+	for i := range b.model.Pages {
+		pg := &b.model.Pages[i]
+		pg.Number = i + 1
+		pg.Frame = b.frame
+		pg.Shapes = append([]Shape{rectShape(StyleFrame, b.frame)}, pg.Shapes...)
+		b.titleBlock(pg, n)
+	}
+}
+
+// clamp returns v limited to [lo, hi].
+func clamp(v, lo, hi float64) float64 {
+	if v < lo {
+		return lo
+	}
+	if v > hi {
+		return hi
+	}
+	return v
+}
+
+// rectShape returns the closed rectangle r as a polygon of style s.
+func rectShape(s Style, r Rect) Shape {
+	return Shape{Kind: Polygon, Style: s, Points: []Pt{{r.X, r.Y}, {r.Right(), r.Y}, {r.Right(), r.Bottom()}, {r.X, r.Bottom()}}}
+}
+
+// line returns the polyline through pts.
+func line(s Style, pts ...Pt) Shape { return Shape{Kind: Polyline, Style: s, Points: pts} }
+
+// poly returns the polygon with ring pts and holes.
+func poly(s Style, pts []Pt, holes ...[]Pt) Shape {
+	return Shape{Kind: Polygon, Style: s, Points: pts, Holes: holes}
+}
+
+// circle returns the circle of centre c and radius r, mm.
+func circle(s Style, c Pt, r float64) Shape {
+	return Shape{Kind: Circle, Style: s, Points: []Pt{c}, R: r}
+}
+
+// text returns a line of text with its baseline at (x, y).
+func (b *builder) text(x, y, size float64, bold bool, s string) Text {
+	return Text{X: x, Y: y, Size: size, Bold: bold, Text: clean(s)}
+}
+
+// continuation lays out the sheets after the first: the elevation, the
+// label key (when it did not fit on sheet 1), the set-up steps and the
+// tables.
+func (b *builder) continuation() {
+	f := newFlow(b)
+	f.newPage()
+	hy := f.y
+	f.y += lineHeight(sizeHeading) + 1.5
+	title := "ELEVATION ALONG THE JET AXIS — x downstream of the nozzle exit, heights above the floor; each station at its axial position and height"
+	// half the sheet, or as much as it takes to reach the plan's scale
+	maxH := f.area.H * 0.5
+	if s, ok := b.elevationScale(f.area.W, maxH); !ok || s > b.model.Scale {
+		if s2, ok2 := b.elevationScale(f.area.W, f.area.H-(f.y-f.area.Y)); ok2 && s2 <= b.model.Scale {
+			maxH = f.area.H - (f.y - f.area.Y)
+		}
+	}
+	if ev, h, ok := b.elevation(f.area.X, f.y, f.area.W, maxH); ok {
+		f.page.Views = append(f.page.Views, View{Name: "elevation", Frame: ev.frame, Scale: b.model.ElevationScale, Shapes: ev.shapes})
+		f.page.Labels = append(f.page.Labels, ev.labels...)
+		f.page.Texts = append(f.page.Texts, ev.texts...)
+		title += fmt.Sprintf(" — scale 1:%d", b.model.ElevationScale)
+		f.y += h + 4
+	} else {
+		title += " — not drawn: it fits no standard scale on this paper"
+	}
+	f.page.Texts = append(f.page.Texts, b.text(f.area.X, hy+capHeight(sizeHeading)+0.5, sizeHeading, true, title))
+	if len(b.model.Key) > 0 && !b.keyPlaced {
+		h := b.keyHeight(f.area.W)
+		f.ensure(h)
+		b.keyPanel(f.page, Rect{f.area.X, f.y, f.area.W, h})
+		f.y += h + 4
+	}
+	f.heading("SET-UP STEPS (for this plan; positions from the datum)", 20)
+	f.columns(b.steps())
+	f.gap(3)
+	f.table(b.stationTable())
+	f.gap(3)
+	f.table(b.arraysTable())
+	f.gap(3)
+	f.table(b.pointsTable())
+	for _, t := range b.absorptionTables() {
+		f.gap(3)
+		f.table(t)
+	}
+	if len(b.plan.Warnings) > 0 {
+		f.gap(3)
+		f.heading("PLANNER WARNINGS", 10)
+		var ls []textLine
+		for _, w := range b.plan.Warnings {
+			ls = append(ls, textLine{text: "• " + w, indent: 0})
+		}
+		f.columns(ls)
+	}
+}

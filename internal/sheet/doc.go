@@ -1,0 +1,61 @@
+// Package sheet lays out and writes the PDF floor layout sheet of a finished
+// plan: the sheet a technician marks a floor from and a safety engineer reads
+// at a glance.
+//
+// It computes nothing the planner should. Clearances, verdicts, zones and
+// absorption come from the [planner.Plan]; this package only computes drawing
+// geometry (page positions, label placement, hatching, the margin band drawn
+// around each zone), the chord lengths between neighbouring stations that the
+// set-up steps print, and unit conversions for printing (package units).
+//
+// # Two steps
+//
+// [Build] lays the sheet out into a [Model]: the pages, the chosen scale,
+// every drawn item's position in millimetres on the page, the placed labels
+// and the tables split across pages. [Model.Render] writes the model as PDF
+// with the core fonts of gofpdf. [Write] does both. The model is plain data,
+// so tests check the layout without reading PDF, and [Model.Dump] gives a
+// deterministic JSON text for golden tests.
+//
+// # What the sheet holds
+//
+// Sheet 1 carries the plan view to a standard scale (the largest of 1:10 …
+// 1:2000 that fits, or the one asked for) with the cell, the plume zones of
+// the governing operating point, the arrays and stations with their labels,
+// the scale bar, the cautions panel, the legend and the title block. The
+// following sheets carry the elevation along the jet axis, the set-up steps,
+// the station table, the operating-points table, the absorption table and the
+// planner's notes. Every sheet has the title block in its bottom-right corner.
+//
+// # Zones drawn
+//
+// The plan and the elevation draw the conservative velocity zone and the
+// nominal potential core of the governing operating point
+// (Plan.Points[Plan.Governing], the one with the largest velocity zone),
+// each zone with its margin band. The hot zone drawn is that of the point
+// with the longest conservative hot zone, which is the governing point's
+// unless another point runs hotter; the sheet then names that point. Zones
+// are clipped to the view frames, with a note saying how far they reach.
+//
+// # Labels
+//
+// Station labels never overlap one another or a mark. Each station gets its
+// ID beside its mark where there is room, or on a leader line a little
+// further out; failing that a key number listed in the label key; failing
+// that a range label such as "N-20…N-35" for a run of neighbouring stations
+// of one array; and the few left are listed in the notes as unlabelled
+// (their positions are in the station table).
+//
+// # Page coordinates
+//
+// Page coordinates are millimetres from the top-left corner of the sheet,
+// x to the right and y down; font sizes are points. Plan and elevation
+// views map cell-frame metres to the page in one place, [View]'s transform,
+// with the view's scale denominator: 1 m is 1000/Scale mm on the page.
+//
+// # Text
+//
+// The core fonts print the cp1252 character set only. Every text is passed
+// through a replacement table first (θ → "theta", ≥ → ">=", − → "-", …), so
+// the model holds exactly what the PDF prints.
+package sheet

@@ -1,0 +1,284 @@
+package sheet
+
+import (
+	"math"
+
+	"github.com/paulmach/orb"
+
+	"arcwright/internal/geometry"
+	"arcwright/internal/planner"
+)
+
+// planView is the plan being drawn: its frame, transform, shapes, labels and
+// the placer that keeps the labels apart.
+type planView struct {
+	b        *builder
+	frame    Rect
+	t        transform
+	shapes   []Shape
+	labels   []Label
+	pl       *placer
+	markR    float64 // station symbol radius, mm
+	idSize   float64 // station ID size, pt
+	lines    int     // sidelines dimensioned so far
+	centres  []centreNote
+	pos      map[*planner.Station]Pt
+	notes    []string  // notes for the panel under the legend
+	refTexts []Text    // texts of the reference symbol
+	callouts []callout // dimension and coordinate callouts to place
+	angles   []callout // angle labels to place where there is room
+}
+
+// planExtent returns the cell-frame rectangle the plan must show, m: the
+// boundary padded by the treatment depth when the cell is bounded,
+// otherwise the obstacles, keep-outs, collector and marks with a margin;
+// in both cases also the datum, the nozzle, the array centres and every
+// station (a station outside the boundary must still be seen).
+func (b *builder) planExtent() orb.Bound {
+	c := &b.req.Cell
+	var bd orb.Bound
+	if c.Bounded() {
+		bd = c.Boundary.Bound().Pad(c.TreatmentDepth)
+	} else {
+		bd = c.Extent()
+	}
+	bd = bd.Extend(orb.Point{0, 0})
+	for _, m := range c.Marks {
+		bd = bd.Extend(m.At)
+	}
+	ex := b.req.Exit
+	bd = bd.Extend(orb.Point{ex.Exit.X, ex.Exit.Y})
+	up := ex.ToCell(geometry.JetPoint{X: -nozzleLen(b.gov.Exit.Diameter)})
+	bd = bd.Extend(orb.Point{up.X, up.Y})
+	for _, a := range b.plan.Arrays {
+		bd = bd.Extend(orb.Point{a.Centre.X, a.Centre.Y})
+	}
+	for i := range b.plan.Stations {
+		s := &b.plan.Stations[i]
+		bd = bd.Extend(orb.Point{s.Mic.X, s.Mic.Y}).Extend(s.Base)
+	}
+	if !c.Bounded() {
+		w, h := bd.Max[0]-bd.Min[0], bd.Max[1]-bd.Min[1]
+		bd = bd.Pad(math.Max(1, 0.05*math.Max(w, h)))
+	}
+	// never draw less than 1 m square
+	if w := bd.Max[0] - bd.Min[0]; w < 1 {
+		bd.Min[0], bd.Max[0] = bd.Min[0]-(1-w)/2, bd.Max[0]+(1-w)/2
+	}
+	if h := bd.Max[1] - bd.Min[1]; h < 1 {
+		bd.Min[1], bd.Max[1] = bd.Min[1]-(1-h)/2, bd.Max[1]+(1-h)/2
+	}
+	return bd
+}
+
+// nozzleLen is the length of the nozzle body drawn upstream of the exit, m.
+func nozzleLen(d float64) float64 { return 3 * d }
+
+// planPage lays out sheet 1.
+func (b *builder) planPage(asked int, field string) error {
+	vf := Rect{b.frame.X, b.frame.Y, b.frame.W - b.colW - gapMM, b.frame.H - stripH}
+	inner := vf.inset(viewPad)
+	ext := b.planExtent()
+	w, h := ext.Max[0]-ext.Min[0], ext.Max[1]-ext.Min[1]
+	scale, err := scaleFor(asked, field, w, h, inner.W, inner.H, b.model.Paper.Name)
+	if err != nil {
+		return err
+	}
+	b.model.Scale = scale
+	cx, cy := (ext.Min[0]+ext.Max[0])/2, (ext.Min[1]+ext.Max[1])/2
+	v := &planView{
+		b: b, frame: vf,
+		t:   newTransform(scale, cx, cy, Pt{inner.X + inner.W/2, inner.Y + inner.H/2}),
+		pl:  newPlacer(vf.inset(0.8)),
+		pos: make(map[*planner.Station]Pt),
+	}
+	z := b.zs
+	v.grid()
+	v.cell()
+	v.drawZones(z)
+	v.nozzle()
+	v.collector()
+	v.positions()
+	v.arrays()
+	v.centreCallouts()
+	v.stations()
+	v.floorMarks()
+	v.datum()
+	v.reference()
+	v.placeLabels(z)
+
+	b.model.Pages = append(b.model.Pages, Page{})
+	pg := &b.model.Pages[0]
+	pg.Views = []View{{Name: "plan", Frame: vf, Scale: scale, Shapes: v.shapes}}
+	pg.Labels = v.labels
+	pg.Texts = append(pg.Texts, v.refTexts...)
+	b.scaleStrip(pg, vf)
+	b.column(pg, v.notes)
+	return nil
+}
+
+// grid draws the light coordinate grid from the datum and labels it at the
+// left and bottom edges of the frame in the layout's units.
+func (v *planView) grid() {
+	b := v.b
+	g := gridSpacing(b.model.Scale, b.req.Units, 18)
+	u := unitLen(b.req.Units)
+	x0, y0 := v.t.world(Pt{v.frame.X, v.frame.Bottom()})
+	x1, y1 := v.t.world(Pt{v.frame.Right(), v.frame.Y})
+	sz := sizeSmall
+	capH := capHeight(sz)
+	for i := math.Ceil(x0 / g); i*g <= x1; i++ {
+		p := v.t.pt(i*g, 0)
+		v.shapes = append(v.shapes, line(StyleGrid, Pt{p.X, v.frame.Y}, Pt{p.X, v.frame.Bottom()}))
+		s := trimNum(i * g / u)
+		w := b.m.width(s, sz, false)
+		if p.X-w/2 < v.frame.X+8 || p.X+w/2 > v.frame.Right()-2 {
+			continue
+		}
+		r := Rect{p.X - w/2 - 0.3, v.frame.Bottom() - 1.2 - capH - 0.4, w + 0.6, capH + 0.8}
+		v.pl.block(r)
+		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid X", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{p.X, v.frame.Bottom()}, View: "plan"})
+	}
+	for j := math.Ceil(y0 / g); j*g <= y1; j++ {
+		p := v.t.pt(0, j*g)
+		v.shapes = append(v.shapes, line(StyleGrid, Pt{v.frame.X, p.Y}, Pt{v.frame.Right(), p.Y}))
+		s := trimNum(j * g / u)
+		w := b.m.width(s, sz, false)
+		if p.Y-capH < v.frame.Y+2 || p.Y+capH > v.frame.Bottom()-6 {
+			continue
+		}
+		r := Rect{v.frame.X + 0.8, p.Y - capH/2 - 0.4, w + 0.6, capH + 0.8}
+		v.pl.block(r)
+		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid Y", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{v.frame.X, p.Y}, View: "plan"})
+	}
+	// axis names at the ends of the labelled edges
+	for _, a := range []struct {
+		s string
+		p Pt
+	}{
+		{"X, " + unitSym(b.req.Units), Pt{v.frame.Right() - 1, v.frame.Bottom() - 1.2 - capH - 0.4}},
+		{"Y, " + unitSym(b.req.Units), Pt{v.frame.X + 0.8, v.frame.Y + 1}},
+	} {
+		w := b.m.width(a.s, sz, true)
+		x := a.p.X
+		if a.s[0] == 'X' {
+			x -= w + 0.6
+		}
+		r := Rect{x, a.p.Y, w + 0.6, capH + 0.8}
+		if v.pl.free(r) {
+			v.pl.take(r)
+			v.labels = append(v.labels, Label{Text: a.s, Kind: FeatureLabel, For: "grid axis", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: a.p, View: "plan"})
+		}
+	}
+	b.gridStep = g
+}
+
+// ringPts returns the page points of a world ring.
+func (v *planView) ringPts(r [][2]float64) []Pt {
+	out := make([]Pt, len(r))
+	for i, p := range r {
+		out[i] = v.t.pt(p[0], p[1])
+	}
+	return out
+}
+
+func orbPts(r orb.Ring) [][2]float64 {
+	out := make([][2]float64, len(r))
+	for i, p := range r {
+		out[i] = [2]float64(p)
+	}
+	return out
+}
+
+// cell draws the treatment, the boundary, keep-out zones and obstacles.
+func (v *planView) cell() {
+	c := &v.b.req.Cell
+	if c.Bounded() {
+		inner := v.ringPts(orbPts(c.Boundary))
+		if c.TreatmentDepth > 0 {
+			outer := v.ringPts(orbPts(offsetRing(c.Boundary, c.TreatmentDepth)))
+			v.shapes = append(v.shapes, poly(StyleTreatment, outer, inner))
+		}
+		v.shapes = append(v.shapes, poly(StyleBoundary, inner))
+	}
+	for _, k := range c.KeepOuts {
+		v.shapes = append(v.shapes, poly(StyleKeepOut, v.ringPts(orbPts(k.Footprint.Outline(48)))))
+	}
+	for _, o := range c.Obstacles {
+		pts := v.ringPts(orbPts(o.Footprint.Outline(48)))
+		v.shapes = append(v.shapes, poly(StyleObstacle, pts))
+	}
+}
+
+// drawZones draws the margin bands, the velocity and hot zones and the
+// potential core of the governing point, and notes where they run out of
+// the frame.
+func (v *planView) drawZones(z zoneSet) {
+	fr := v.b.req.Exit
+	for _, o := range []zoneOutline{z.velM, z.hotM} {
+		if o != nil {
+			v.shapes = append(v.shapes, poly(StyleMargin, v.ringPts(planRing(fr, o))))
+		}
+	}
+	if z.vel != nil {
+		v.shapes = append(v.shapes, poly(StyleVelocity, v.ringPts(planRing(fr, z.vel))))
+	}
+	if z.hot != nil {
+		v.shapes = append(v.shapes, poly(StyleHot, v.ringPts(planRing(fr, z.hot))))
+	}
+	if z.core > 0 {
+		core := zoneOutline{{0, 0}, {0, z.exitR}, {z.core, 0}}
+		v.shapes = append(v.shapes, poly(StyleCore, v.ringPts(planRing(fr, core))))
+	}
+}
+
+// nozzle draws the nozzle body, its exit and the jet axis across the frame.
+func (v *planView) nozzle() {
+	fr := v.b.req.Exit
+	d := v.b.gov.Exit.Diameter
+	// draw at least 1.2 mm wide so the nozzle is seen at small scales
+	d = math.Max(d, 1.2/v.t.k)
+	l := nozzleLen(d)
+	at := func(x, r float64) Pt {
+		c := fr.ToCell(geometry.JetPoint{X: x, R: math.Abs(r), Azimuth: az(r)})
+		return v.t.pt(c.X, c.Y)
+	}
+	body := []Pt{at(0, d/2), at(-l, 0.8*d), at(-l, -0.8*d), at(0, -d/2)}
+	v.shapes = append(v.shapes, poly(StyleNozzle, body))
+	v.pl.block(boundOf(body))
+	// the axis, from behind the nozzle to beyond the frame
+	far := (v.frame.W + v.frame.H) / v.t.k
+	v.shapes = append(v.shapes, line(StyleAxis, at(-l-0.5*d-2/v.t.k, 0), at(far, 0)))
+}
+
+// az returns the azimuth of the side a signed plan offset r lies on: left
+// (0) for r >= 0, right (π) otherwise.
+func az(r float64) float64 {
+	if r < 0 {
+		return math.Pi
+	}
+	return 0
+}
+
+// collector draws the exhaust collector: its inlet across its axis, the
+// duct walls and the axis.
+func (v *planView) collector() {
+	col := v.b.req.Cell.Collector
+	if col == nil {
+		return
+	}
+	s, c := math.Sincos(col.Heading)
+	ax, left := Pt{c, s}, Pt{-s, c} // world plan directions
+	w := func(p Pt) Pt { return v.t.pt(p.X, p.Y) }
+	in := Pt{col.Inlet.X, col.Inlet.Y}
+	r := col.Diameter / 2
+	duct := math.Max(col.Diameter, 1)
+	p1, p2 := add(in, mul(left, r)), sub(in, mul(left, r))
+	v.shapes = append(v.shapes,
+		line(StyleCollector, w(p1), w(p2)),
+		line(StyleBase, w(p1), w(add(p1, mul(ax, duct)))),
+		line(StyleBase, w(p2), w(add(p2, mul(ax, duct)))),
+		line(StyleAxis, w(sub(in, mul(ax, 0.3*r))), w(add(in, mul(ax, duct+0.3*r)))),
+	)
+	v.pl.block(boundOf([]Pt{w(p1), w(p2)}))
+}

@@ -1,0 +1,164 @@
+package sheet_test
+
+import (
+	"bytes"
+	"errors"
+	"os"
+	"os/exec"
+	"path/filepath"
+	"regexp"
+	"strconv"
+	"strings"
+	"testing"
+	"time"
+
+	"arcwright/internal/planner"
+	"arcwright/internal/sheet"
+)
+
+// render writes m to a buffer and fails the test on an error.
+func render(t testing.TB, m *sheet.Model) []byte {
+	t.Helper()
+	var buf bytes.Buffer
+	if err := m.Render(&buf); err != nil {
+		t.Fatalf("Render: %v", err)
+	}
+	return buf.Bytes()
+}
+
+func TestRenderIsDeterministic(t *testing.T) {
+	for _, tt := range []struct {
+		name string
+		plan func(testing.TB) *planner.Plan
+	}{{"chamber", chamberPlan}, {"pad", func(t testing.TB) *planner.Plan { return padPlan(t, 120) }}} {
+		t.Run(tt.name, func(t *testing.T) {
+			var outs [2][]byte
+			for i := range outs {
+				var buf bytes.Buffer
+				if err := sheet.Write(&buf, tt.plan(t), sheet.Options{Now: fixedClock}); err != nil {
+					t.Fatal(err)
+				}
+				outs[i] = buf.Bytes()
+			}
+			if !bytes.Equal(outs[0], outs[1]) {
+				t.Fatalf("two writes differ: %d and %d bytes", len(outs[0]), len(outs[1]))
+			}
+			if !bytes.HasPrefix(outs[0], []byte("%PDF-")) {
+				t.Fatalf("got %q at the start, want a PDF header", outs[0][:8])
+			}
+		})
+	}
+}
+
+// TestRenderDateFromIssueDate: with a date in the title block the PDF does
+// not depend on the clock.
+func TestRenderDateFromIssueDate(t *testing.T) {
+	a := render(t, build(t, chamberPlan(t), sheet.Options{Now: fixedClock}))
+	b := render(t, build(t, chamberPlan(t), sheet.Options{Now: func() time.Time { return fixedClock().AddDate(1, 0, 0) }}))
+	if !bytes.Equal(a, b) {
+		t.Fatal("the PDF changed with the clock although the title block gives the date")
+	}
+	if !bytes.Contains(a, []byte("D:20250310000000")) {
+		t.Error("got no creation date D:20250310000000 (the title block's 2025-03-10) in the PDF")
+	}
+}
+
+// failWriter fails every write.
+type failWriter struct{}
+
+func (failWriter) Write([]byte) (int, error) { return 0, errors.New("disk full") }
+
+func TestRenderWrapsWriterError(t *testing.T) {
+	err := build(t, chamberPlan(t), sheet.Options{}).Render(failWriter{})
+	if !errors.Is(err, sheet.ErrRender) || !strings.Contains(err.Error(), "disk full") {
+		t.Fatalf("got %v, want an ErrRender carrying the writer's error", err)
+	}
+}
+
+// poppler returns the path of a poppler-utils tool or skips the test.
+func poppler(t *testing.T, tool string) string {
+	t.Helper()
+	p, err := exec.LookPath(tool)
+	if err != nil {
+		t.Skipf("%s (poppler-utils) is not installed: install poppler-utils to read the PDF back", tool)
+	}
+	return p
+}
+
+// readBack writes pdf to a file and returns pdfinfo's page count and
+// pdftotext -layout's text with runs of spaces squeezed.
+func readBack(t *testing.T, pdf []byte) (int, string) {
+	t.Helper()
+	info, text := poppler(t, "pdfinfo"), poppler(t, "pdftotext")
+	path := filepath.Join(t.TempDir(), "sheet.pdf")
+	if err := os.WriteFile(path, pdf, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out, err := exec.Command(info, path).CombinedOutput()
+	if err != nil {
+		t.Fatalf("pdfinfo: %v\n%s", err, out)
+	}
+	m := regexp.MustCompile(`(?m)^Pages:\s+(\d+)`).FindSubmatch(out)
+	if m == nil {
+		t.Fatalf("pdfinfo gave no page count:\n%s", out)
+	}
+	pages, _ := strconv.Atoi(string(m[1]))
+	txt, err := exec.Command(text, "-layout", path, "-").CombinedOutput()
+	if err != nil {
+		t.Fatalf("pdftotext: %v\n%s", err, txt)
+	}
+	return pages, regexp.MustCompile(`[ \t]+`).ReplaceAllString(string(txt), " ")
+}
+
+func TestReadBackWithPoppler(t *testing.T) {
+	tests := []struct {
+		name  string
+		plan  func(testing.TB) *planner.Plan
+		opt   sheet.Options
+		wants []string
+	}{
+		{"chamber A3", chamberPlan, sheet.Options{}, []string{
+			"Scale 1:50 on A3", "Model jet arc survey", "Chamber A", "MJ-2025-07", "2025-03-10", "J. Ortega",
+			"sheet", "1 of 4", "4 of 4", "plan 1:50", "metric: m", "polar angle measured from the downstream jet axis",
+			"5.0 m/s", "50.0 °C", "0.250 m", "conservative end of", "A-01 -> A-10: 0.813 m",
+		}},
+		{"chamber A4", chamberPlan, sheet.Options{Paper: "A4"}, []string{"Scale 1:100 on A4", "A4 landscape", "5 m"}},
+		{"pad imperial", func(t testing.TB) *planner.Plan { return padPlan(t, 60) }, sheet.Options{}, []string{
+			"Scale 1:200 on A3", "Pad 7 engine noise survey", "EN-41", "feet and inches", "polar angle measured from the inlet",
+			"16.4 ft/s", "122.0 °F", "open sky", "50 ft",
+		}},
+	}
+	cautions := []string{"CAUTION", "HOT-EXHAUST AND HIGH-VELOCITY ZONES", "MEAN flow", "hearing protection",
+		"Keep out of the cell during runs", "safety procedures, local codes and licensed practice"}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			p := tt.plan(t)
+			m := build(t, p, tt.opt)
+			pages, text := readBack(t, render(t, m))
+			if pages != len(m.Pages) {
+				t.Errorf("got %d pages from pdfinfo, want %d as in the model", pages, len(m.Pages))
+			}
+			for _, s := range p.Stations {
+				if !strings.Contains(text, s.ID) {
+					t.Errorf("station %s is not in the PDF text", s.ID)
+				}
+			}
+			for _, w := range append(cautions, tt.wants...) {
+				if !strings.Contains(text, w) {
+					t.Errorf("%q is not in the PDF text", w)
+				}
+			}
+			if !strings.Contains(text, m.ScaleBar.Label) {
+				t.Errorf("the scale bar's label %q is not in the PDF text", m.ScaleBar.Label)
+			}
+			if !strings.Contains(text, "1:"+strconv.Itoa(m.Scale)) {
+				t.Errorf("the scale 1:%d is not stated in the PDF text", m.Scale)
+			}
+			// the cautions are on the first page
+			first := strings.SplitN(text, "\f", 2)[0]
+			if !strings.Contains(first, "CAUTION") || !strings.Contains(first, "hearing protection") {
+				t.Error("the cautions are not on the first page")
+			}
+		})
+	}
+}

@@ -1,0 +1,90 @@
+package sheet_test
+
+import (
+	"strings"
+	"testing"
+
+	"arcwright/internal/sheet"
+)
+
+// pageText joins the texts of every page, one per line.
+func pageText(m *sheet.Model) string {
+	var b strings.Builder
+	for _, pg := range m.Pages {
+		for _, t := range pg.Texts {
+			b.WriteString(t.Text)
+			b.WriteByte('\n')
+		}
+	}
+	return b.String()
+}
+
+// flowText joins the texts of every page into one line of words, undoing
+// the wrapping of paragraphs.
+func flowText(m *sheet.Model) string { return strings.Join(strings.Fields(pageText(m)), " ") }
+
+func TestSetUpSteps(t *testing.T) {
+	m := build(t, chamberPlan(t), sheet.Options{})
+	text := flowText(m)
+	for _, want := range []string{
+		// arc A: R = 3.5 m, steps of 13.333°: chord 2·3.5·sin(6.667°) = 0.8127 m (hand-computed)
+		"A-01 -> A-10: 0.813 m each step",
+		// arc B: R = 1.2 m, 10° steps: 2·1.2·sin(5°) = 0.2092 m (hand-computed)
+		"B-01 -> B-04: 0.209 m each step",
+		// the centre of arc A is the nozzle exit, (0.5, 0)
+		"Mark the centre on the jet axis, 0.000 m downstream of the exit: X 0.500 m, Y 0.000 m from the datum.",
+		"Swing radius 3.500 m from the centre",
+		// line L: 2.5 m to the right, stations every 1 m from x = 1 m
+		"parallel to the jet axis, 2.500 m to the right of the axis",
+		"L-01 -> L-07: 1.000 m each step",
+		// mark P1 at (0, 4): 4.000 m from the datum
+		"Check mark P1: X 0.000 m, Y 4.000 m, 4.000 m from the datum by tape.",
+		"Set the microphone heights with a laser level from the floor: 1.500 m.",
+		"Do NOT set A-08, A-09 and A-10",
+		"diaphragm edge-on to the aim point",
+		"Stand boom has a 0.400 m boom",
+		"people out of the cell",
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("the set-up steps do not say %q", want)
+		}
+	}
+}
+
+// TestZonesDrawn: the chamber's governing point SP3 is cold, so the sheet
+// draws the hot zone of SP7, the hottest point, and says so.
+func TestZonesDrawn(t *testing.T) {
+	p := chamberPlan(t)
+	m := build(t, p, sheet.Options{})
+	if m.Governing != "SP3" {
+		t.Fatalf("got governing point %s, want SP3", m.Governing)
+	}
+	text := flowText(m)
+	for _, want := range []string{
+		"The zones drawn are those of operating point SP3",
+		"the hot zone of point SP7, the largest hot zone",
+		// the length of SP3's conservative velocity zone as the plan holds it
+		"velocity zone to 26.917 m from the exit",
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("the sheet does not say %q", want)
+		}
+	}
+	count := map[sheet.Style]int{}
+	for _, v := range m.Pages[0].Views {
+		for _, s := range v.Shapes {
+			count[s.Style]++
+		}
+	}
+	for _, st := range []sheet.Style{sheet.StyleVelocity, sheet.StyleHot, sheet.StyleCore, sheet.StyleBoundary, sheet.StyleTreatment, sheet.StyleKeepOut} {
+		if count[st] != 1 {
+			t.Errorf("got %d shapes of style %s in the plan, want 1", count[st], st)
+		}
+	}
+	if count[sheet.StyleMargin] != 2 {
+		t.Errorf("got %d margin bands, want 2 (velocity and hot)", count[sheet.StyleMargin])
+	}
+	if count[sheet.StyleObstacle] != 2 {
+		t.Errorf("got %d obstacles drawn, want 2", count[sheet.StyleObstacle])
+	}
+}
