@@ -1,0 +1,209 @@
+package main
+
+import (
+	"encoding/csv"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+
+	"github.com/spf13/cobra"
+	"github.com/spf13/pflag"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/layout"
+	"arcwright/internal/planner"
+	"arcwright/internal/units"
+)
+
+// AirOptions are the air command's inputs.
+type AirOptions struct {
+	Temperature, Humidity, Pressure float64
+	From, To                        float64
+	Distances                       []float64
+	Format                          string
+}
+
+// AddFlags binds the options to fs.
+func (o *AirOptions) AddFlags(fs *pflag.FlagSet) {
+	fs.Var(newQuantity(units.Temperature, "", &o.Temperature, ""), "temperature", "air temperature, e.g. 20C (without a layout)")
+	fs.Var(newQuantity(units.Fraction, "%", &o.Humidity, ""), "humidity", "relative humidity, e.g. 70% (without a layout)")
+	fs.Var(newQuantity(units.Pressure, "", &o.Pressure, "101.325kPa"), "pressure", "air pressure (without a layout)")
+	fs.Var(newQuantity(units.Frequency, "", &o.From, "50Hz"), "from", "lowest band centre (without a layout)")
+	fs.Var(newQuantity(units.Frequency, "", &o.To, "100kHz"), "to", "highest band centre (without a layout)")
+	fs.Var(&quantityList{dim: units.Length, values: &o.Distances}, "distance", "paths to give the loss over, e.g. 3m,5m (without a layout)")
+	formatFlag(fs, &o.Format, "text", "csv", "json")
+}
+
+func newAirCommand(stdout io.Writer) *cobra.Command {
+	o := &AirOptions{}
+	c := &cobra.Command{
+		Use:   "air [LAYOUT]",
+		Short: "Tabulate atmospheric absorption over the band of interest (ISO 9613-1)",
+		Long: `Tabulate the pure-tone atmospheric absorption of ISO 9613-1:1993 at the exact
+base-ten centre of every 1/3-octave band (labelled with its nominal name), in
+dB/m, and the loss over each array's path: the table used to correct measured
+spectra to lossless.
+
+With a layout, the ambient air, the band of interest and the arrays come from
+it (the arrays are placed first, so automatic radii are known). Without one,
+give --temperature and --humidity (and optionally --pressure, --from, --to and
+--distance).
+
+Examples:
+  arcwright air layouts/anechoic-model-jet.yaml
+  arcwright air --temperature 20C --humidity 70% --from 1kHz --to 80kHz --distance 3m,5m --format csv
+
+Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
+		Args: cobra.MaximumNArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runAir(o, cmd.Flags(), args, stdout)
+		},
+	}
+	o.AddFlags(c.Flags())
+	return c
+}
+
+func runAir(o *AirOptions, fs *pflag.FlagSet, args []string, w io.Writer) error {
+	var tab airTable
+	if len(args) == 1 {
+		for _, f := range []string{"temperature", "humidity", "pressure", "from", "to", "distance"} {
+			if fs.Changed(f) {
+				return usageError{fmt.Errorf("--%s is for use without a layout; the layout sets it", f)}
+			}
+		}
+		req, _, err := layout.Load(args[0])
+		if err != nil {
+			return err
+		}
+		plan, err := planner.New(req)
+		if err != nil {
+			return fmt.Errorf("%s: %w", args[0], err)
+		}
+		tab = airFromPlan(plan)
+	} else {
+		if !fs.Changed("temperature") || !fs.Changed("humidity") {
+			return usageError{errors.New("give --temperature and --humidity (absorption depends strongly on both), or a layout file")}
+		}
+		atm := acoustics.Atmosphere{Temperature: o.Temperature, RelativeHumidity: 100 * o.Humidity, Pressure: o.Pressure}
+		if err := atm.Validate(); err != nil {
+			return err
+		}
+		bands, err := acoustics.ThirdOctaveBands(o.From, o.To)
+		if err != nil {
+			return fmt.Errorf("--from/--to: %w", err)
+		}
+		tab = airTable{Atmosphere: atm}
+		for _, d := range o.Distances {
+			tab.Paths = append(tab.Paths, airPath{Label: units.FormatLength(d, units.Metric), Metres: d})
+		}
+		for _, b := range bands {
+			row := airRow{Nominal: b.Nominal, Centre: b.Centre, PerM: atm.Absorption(b.Centre)}
+			for _, d := range o.Distances {
+				row.Loss = append(row.Loss, row.PerM*d)
+			}
+			tab.Rows = append(tab.Rows, row)
+		}
+	}
+	switch o.Format {
+	case "csv":
+		return airCSV(w, tab)
+	case "json":
+		a := tab.Atmosphere
+		tab.Air = airJSON{TemperatureK: a.Temperature, RelativeHumidity: a.RelativeHumidity, PressurePa: a.Pressure, Standard: "ISO 9613-1:1993, pure tone at the exact band centre"}
+		enc := json.NewEncoder(w)
+		enc.SetIndent("", "  ")
+		return enc.Encode(tab)
+	}
+	return airText(w, tab)
+}
+
+// airTable is the absorption table the air command prints.
+type airTable struct {
+	Atmosphere acoustics.Atmosphere `json:"-"`
+	Air        airJSON              `json:"atmosphere"`
+	Paths      []airPath            `json:"paths"`
+	Rows       []airRow             `json:"bands"`
+}
+
+type airJSON struct {
+	TemperatureK     float64 `json:"temperature_k"`
+	RelativeHumidity float64 `json:"relative_humidity_percent"`
+	PressurePa       float64 `json:"pressure_pa"`
+	Standard         string  `json:"standard"`
+}
+
+// airPath is a path the loss is given over: an array's radius or mean
+// distance, or a --distance.
+type airPath struct {
+	Label  string  `json:"label"`
+	Metres float64 `json:"metres"`
+}
+
+type airRow struct {
+	Nominal string    `json:"nominal"`
+	Centre  float64   `json:"frequency_hz"`
+	PerM    float64   `json:"db_per_m"`
+	Loss    []float64 `json:"loss_db"`
+}
+
+// airFromPlan takes the plan's absorption table and its arrays' paths.
+func airFromPlan(p *planner.Plan) airTable {
+	a := p.Request.Ambient
+	t := airTable{Atmosphere: acoustics.Atmosphere{Temperature: a.Temperature, RelativeHumidity: a.Humidity, Pressure: a.Pressure}}
+	for i, arr := range p.Arrays {
+		d := 0.0
+		if len(p.Absorption) > 0 && p.Absorption[0].PerM > 0 {
+			d = p.Absorption[0].ArrayDB[i] / p.Absorption[0].PerM
+		}
+		t.Paths = append(t.Paths, airPath{Label: arr.Name + " " + units.FormatLength(d, p.Request.Units), Metres: d})
+	}
+	for _, r := range p.Absorption {
+		t.Rows = append(t.Rows, airRow{Nominal: r.Band.Nominal, Centre: r.Band.Centre, PerM: r.PerM, Loss: r.ArrayDB})
+	}
+	return t
+}
+
+func airCSV(w io.Writer, t airTable) error {
+	cw := csv.NewWriter(w)
+	head := []string{"band", "frequency_hz", "db_per_m"}
+	for _, p := range t.Paths {
+		head = append(head, fmt.Sprintf("loss_db_%s", strings.ReplaceAll(p.Label, " ", "_")))
+	}
+	cw.Write(head)
+	for _, r := range t.Rows {
+		rec := []string{r.Nominal, strconv.FormatFloat(r.Centre, 'f', 3, 64), strconv.FormatFloat(r.PerM, 'g', 6, 64)}
+		for _, l := range r.Loss {
+			rec = append(rec, strconv.FormatFloat(l, 'f', 4, 64))
+		}
+		cw.Write(rec)
+	}
+	cw.Flush()
+	return cw.Error()
+}
+
+func airText(w io.Writer, t airTable) error {
+	a := t.Atmosphere
+	fmt.Fprintf(w, "Atmospheric absorption, ISO 9613-1:1993, at %.1f °C, %.0f %% relative humidity, %.2f kPa\n",
+		a.Temperature-273.15, a.RelativeHumidity, a.Pressure/1000)
+	for _, s := range a.Warnings() {
+		fmt.Fprintln(w, "  warning: "+s)
+	}
+	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', tabwriter.AlignRight)
+	fmt.Fprint(tw, "band\tcentre (Hz)\tdB/m\tdB/100 m\t")
+	for _, p := range t.Paths {
+		fmt.Fprintf(tw, "%s\t", p.Label)
+	}
+	fmt.Fprintln(tw)
+	for _, b := range t.Rows {
+		fmt.Fprintf(tw, "%s\t%.1f\t%.5f\t%.2f\t", b.Nominal, b.Centre, b.PerM, 100*b.PerM)
+		for _, l := range b.Loss {
+			fmt.Fprintf(tw, "%.2f dB\t", l)
+		}
+		fmt.Fprintln(tw)
+	}
+	return tw.Flush()
+}

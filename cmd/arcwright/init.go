@@ -1,0 +1,54 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"io/fs"
+	"os"
+
+	"github.com/spf13/cobra"
+
+	"arcwright/internal/export"
+	"arcwright/internal/layout"
+)
+
+func newInitCommand(stdout io.Writer) *cobra.Command {
+	var force bool
+	c := &cobra.Command{
+		Use:   "init [FILE]",
+		Short: "Write a commented starter layout",
+		Long: `Write a complete, commented starter layout to FILE (default layout.yaml): an
+imaginary anechoic chamber with a model jet, three operating points, an arc, a
+sideline and a probe stand. Every key is explained in its comment; edit it for
+your cell and test, then run 'arcwright validate FILE'.
+
+An existing file is not overwritten unless --force is given.
+
+Exit status: 0 on success, 1 if the file exists or cannot be written, 2 on a
+bad command line.`,
+		Args: cobra.MaximumNArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			path := "layout.yaml"
+			if len(args) == 1 {
+				path = args[0]
+			}
+			if _, err := os.Stat(path); err == nil && !force {
+				return fmt.Errorf("%s already exists; use --force to overwrite it", path)
+			} else if err != nil && !errors.Is(err, fs.ErrNotExist) {
+				return err
+			}
+			err := export.WriteFile(path, func(w io.Writer) error {
+				_, err := w.Write(layout.Starter())
+				return err
+			})
+			if err != nil {
+				return err
+			}
+			fmt.Fprintf(stdout, "wrote %s: edit it, then run 'arcwright validate %s'\n", path, path)
+			return nil
+		},
+	}
+	c.Flags().BoolVar(&force, "force", false, "overwrite an existing file")
+	return c
+}

@@ -1,0 +1,258 @@
+package main
+
+import (
+	"bytes"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+	"strings"
+	"text/tabwriter"
+	"time"
+
+	"github.com/spf13/cobra"
+	"github.com/spf13/pflag"
+
+	"arcwright/internal/export"
+	"arcwright/internal/jet"
+	"arcwright/internal/layout"
+	"arcwright/internal/planner"
+	"arcwright/internal/sheet"
+	"arcwright/internal/units"
+)
+
+// PlanOptions are the plan command's inputs.
+type PlanOptions struct {
+	Layout                      string
+	JSON, CSV, GeoJSON, PDF     string
+	Format, Paper, Scale, Units string
+	// Now is the clock for the sheet's issue date when the layout has none.
+	Now func() time.Time
+}
+
+// AddFlags binds the options to fs.
+func (o *PlanOptions) AddFlags(fs *pflag.FlagSet) {
+	fs.StringVar(&o.PDF, "pdf", "", "write the floor layout sheet (PDF) to this file")
+	fs.StringVar(&o.CSV, "csv", "", "write the station table (CSV) to this file")
+	fs.StringVar(&o.JSON, "json", "", "write the whole plan (JSON) to this file")
+	fs.StringVar(&o.GeoJSON, "geojson", "", "write stations, arcs, zones and obstacles (GeoJSON, cell frame in metres) to this file")
+	formatFlag(fs, &o.Format, "text", "json")
+	fs.StringVar(&o.Paper, "paper", "", "sheet paper: A4, A3, Letter or Tabloid (default: the layout's, else A3)")
+	fs.StringVar(&o.Scale, "scale", "", "sheet scale, e.g. 1:50 (default: the layout's, else the largest standard scale that fits)")
+	unitsFlag(fs, &o.Units)
+}
+
+func newPlanCommand(stdout io.Writer) *cobra.Command {
+	o := &PlanOptions{Now: time.Now}
+	c := &cobra.Command{
+		Use:   "plan LAYOUT",
+		Short: "Place every station, check it for every operating point, write the sheet and exports",
+		Long: `Place every station of the layout's arrays, check each against every operating
+point of the test matrix (clearance from the velocity and hot zones with the
+margin, walls and wedges, obstacles, keep-out zones and other stands, line of
+sight to the source region, far field, floor reflection, air absorption,
+entrained inflow, buoyant plumes), and print a summary: stations ok, warned and
+blocked, the governing operating point, automatic radii, and what blocks what.
+
+--pdf writes the floor layout sheet; --csv, --json and --geojson write the
+exports. Files are only written when planning succeeds, each one whole or not
+at all. --format json prints the plan as JSON on standard output instead of
+the summary.
+
+Examples:
+  arcwright plan layouts/anechoic-model-jet.yaml --pdf sheet.pdf
+  arcwright plan layout.yaml --csv stations.csv --geojson plan.geojson --paper Tabloid --scale 1:50
+
+Exit status: 0 when the plan is made (blocked stations are part of the
+answer; use 'arcwright check' as a gate), 1 on bad input or a failed write,
+2 on a bad command line.`,
+		Args: cobra.ExactArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			o.Layout = args[0]
+			return runPlan(o, stdout)
+		},
+	}
+	o.AddFlags(c.Flags())
+	return c
+}
+
+// parseScale reads "1:50" or "50".
+func parseScale(s string) (int, error) {
+	if s == "" {
+		return 0, nil
+	}
+	t := strings.TrimPrefix(strings.ReplaceAll(s, " ", ""), "1:")
+	n, err := strconv.Atoi(t)
+	if err != nil || n <= 0 {
+		return 0, usageError{fmt.Errorf("--scale: want a scale such as 1:50, got %q", s)}
+	}
+	return n, nil
+}
+
+func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error) {
+	req, _, err := layout.Load(path)
+	if err != nil {
+		return nil, err
+	}
+	switch unitsOverride {
+	case "metric":
+		req.Units = units.Metric
+	case "imperial":
+		req.Units = units.Imperial
+	}
+	if asBuilt != "" {
+		req.AsBuilt, err = layout.LoadAsBuilt(asBuilt, req)
+		if err != nil {
+			return nil, err
+		}
+	}
+	p, err := planner.New(req)
+	if err != nil {
+		return nil, fmt.Errorf("%s: %w", path, err)
+	}
+	return p, nil
+}
+
+func runPlan(o *PlanOptions, w io.Writer) error {
+	scale, err := parseScale(o.Scale)
+	if err != nil {
+		return err
+	}
+	p, err := loadPlan(o.Layout, o.Units, "")
+	if err != nil {
+		return err
+	}
+	// render everything first: a failure leaves no file behind
+	type output struct {
+		path string
+		data []byte
+	}
+	var outs []output
+	render := func(path string, f func(io.Writer) error) error {
+		if path == "" {
+			return nil
+		}
+		var b bytes.Buffer
+		if err := f(&b); err != nil {
+			return fmt.Errorf("%s: %w", path, err)
+		}
+		outs = append(outs, output{path, b.Bytes()})
+		return nil
+	}
+	if err := render(o.PDF, func(b io.Writer) error {
+		return sheet.Write(b, p, sheet.Options{Paper: o.Paper, Scale: scale, Now: o.Now})
+	}); err != nil {
+		return err
+	}
+	for _, r := range []struct {
+		path string
+		f    func(io.Writer, *planner.Plan) error
+	}{{o.CSV, export.CSV}, {o.JSON, export.JSON}, {o.GeoJSON, export.GeoJSON}} {
+		f := r.f
+		if err := render(r.path, func(b io.Writer) error { return f(b, p) }); err != nil {
+			return err
+		}
+	}
+	for _, out := range outs {
+		data := out.data
+		if err := export.WriteFile(out.path, func(f io.Writer) error { _, err := f.Write(data); return err }); err != nil {
+			return err
+		}
+	}
+	if o.Format == "json" {
+		return export.JSON(w, p)
+	}
+	planText(w, p)
+	for _, out := range outs {
+		fmt.Fprintf(w, "wrote %s\n", out.path)
+	}
+	return nil
+}
+
+// planText prints the plan's summary.
+func planText(w io.Writer, p *planner.Plan) {
+	req := p.Request
+	sys := req.Units
+	L := func(m float64) string { return units.FormatLength(m, sys) }
+	conv := req.Convention
+	fmt.Fprintf(w, "%s: %d stations — %d ok, %d warn, %d blocked\n", req.Source, len(p.Stations), p.OK, p.Warn, p.Blocked)
+	fmt.Fprintf(w, "governing operating point: %s (largest conservative zones; the sheet draws it)\n", p.Points[p.Governing].Name)
+	fmt.Fprintf(w, "polar angles %s (%s)\n\n", conv, conv.Symbol())
+
+	fmt.Fprintln(w, "Operating points")
+	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	fmt.Fprintln(tw, "  point\tNPR\tMj\tUj\tT0\tcore\tvelocity zone\thot zone\tcollector\t")
+	for _, pt := range p.Points {
+		zone := func(e *jet.Envelope) string {
+			if e.Length == 0 {
+				return "none"
+			}
+			return fmt.Sprintf("%s × %s", units.FormatLengthApprox(e.Length, sys), units.FormatLengthApprox(2*e.MaxRadius, sys))
+		}
+		fmt.Fprintf(tw, "  %s\t%.4g\t%.3f\t%s\t%s\t%s\t%s\t%s\t%s\t\n", pt.Name, pt.Condition.Primary.NPR, pt.Exit.Mach,
+			units.FormatVelocity(pt.Exit.Velocity, sys), units.FormatTemperature(pt.Exit.TotalTemperature, sys),
+			L(pt.CoreNominal), zone(pt.Velocity()), zone(pt.Hot()), pt.Capture)
+	}
+	tw.Flush()
+	fmt.Fprintln(w, "  zones: conservative, length × width, for clearances")
+
+	fmt.Fprintln(w, "\nArrays")
+	for _, a := range p.Arrays {
+		fmt.Fprintf(w, "  %s (%s, %d %s)", a.Name, a.Kind, a.Stations, plural(a.Stations, "station", "stations"))
+		switch a.Kind {
+		case planner.Arc:
+			how := "as given"
+			if a.Auto {
+				how = "chosen: the largest the room allows"
+			}
+			fmt.Fprintf(w, ": radius %s, %s\n", L(a.Radius), how)
+			if a.FarField[0] <= a.FarField[1] {
+				fmt.Fprintf(w, "      far-field radii %s to %s: %s\n", L(a.FarField[0]), L(a.FarField[1]), a.FarFieldNote)
+			} else {
+				fmt.Fprintf(w, "      far-field radii: %s\n", a.FarFieldNote)
+			}
+			if !math.IsNaN(a.MinClearPolar) {
+				fmt.Fprintf(w, "      closest angle to the jet that clears the zones at this radius: %s %.1f°\n", conv.Symbol(), a.MinClearPolar*180/math.Pi)
+			} else {
+				fmt.Fprintln(w, "      no angle clears the zones at this radius")
+			}
+		case planner.Line:
+			fmt.Fprintf(w, ": %s from the axis\n", L(a.Radius))
+		case planner.Ring:
+			fmt.Fprintf(w, ": %s from the axis\n", L(a.Radius))
+		default:
+			fmt.Fprintln(w)
+		}
+		for _, n := range a.Notes {
+			fmt.Fprintln(w, "      note: "+n)
+		}
+		for _, b := range a.Blocked {
+			fmt.Fprintln(w, "      blocked: "+b)
+		}
+	}
+
+	var attention []planner.Station
+	for _, s := range p.Stations {
+		if s.Status != planner.OK {
+			attention = append(attention, s)
+		}
+	}
+	if len(attention) > 0 {
+		fmt.Fprintln(w, "\nStations that are not ok (first reason; the sheet and exports list all)")
+		tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+		for _, s := range attention {
+			more := ""
+			if len(s.Reasons) > 1 {
+				more = fmt.Sprintf(" (+%d more)", len(s.Reasons)-1)
+			}
+			fmt.Fprintf(tw, "  %s\t%s\t%s%s\t\n", s.ID, s.Status, s.Reasons[0], more)
+		}
+		tw.Flush()
+	}
+	if len(p.Warnings) > 0 {
+		fmt.Fprintln(w, "\nWarnings")
+		for _, s := range p.Warnings {
+			fmt.Fprintln(w, "  - "+s)
+		}
+	}
+}

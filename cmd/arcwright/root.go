@@ -1,0 +1,108 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/spf13/cobra"
+
+	"arcwright/internal/layout"
+)
+
+// version is the program's version; release builds set it with
+// -ldflags "-X main.version=…".
+var version = "0.1.0-dev"
+
+// Exit statuses.
+const (
+	exitOK      = 0 // done; for check: every station evaluated and none blocked
+	exitError   = 1 // bad input, unreadable layout, a failed write
+	exitUsage   = 2 // an unknown command or flag
+	exitBlocked = 3 // check: at least one station is blocked
+)
+
+// errBlocked is returned by check when a station is blocked.
+var errBlocked = errors.New("at least one station is blocked")
+
+// usageError marks an error in the command line itself.
+type usageError struct{ err error }
+
+func (e usageError) Error() string { return e.err.Error() }
+func (e usageError) Unwrap() error { return e.err }
+
+// run executes the command line args and returns the exit status. It is the
+// only place that maps errors to statuses.
+func run(args []string, stdout, stderr io.Writer) int {
+	root := newRootCommand(stdout, stderr)
+	root.SetArgs(args)
+	err := root.Execute()
+	switch {
+	case err == nil:
+		return exitOK
+	case errors.Is(err, errBlocked):
+		return exitBlocked
+	}
+	var le layout.Errors
+	if errors.As(err, &le) {
+		for _, e := range le {
+			fmt.Fprintln(stderr, e)
+		}
+		fmt.Fprintf(stderr, "arcwright: %d %s in the layout; nothing was written\n", len(le), plural(len(le), "problem", "problems"))
+		return exitError
+	}
+	fmt.Fprintln(stderr, "arcwright: "+err.Error())
+	var ue usageError
+	if errors.As(err, &ue) || strings.HasPrefix(err.Error(), "unknown command") || strings.HasPrefix(err.Error(), "unknown flag") || strings.HasPrefix(err.Error(), "unknown shorthand flag") {
+		fmt.Fprintln(stderr, "Run 'arcwright help' for usage.")
+		return exitUsage
+	}
+	return exitError
+}
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}
+
+func newRootCommand(stdout, stderr io.Writer) *cobra.Command {
+	root := &cobra.Command{
+		Use:   "arcwright",
+		Short: "Plan microphone stations around a jet exhaust and print the floor layout sheet",
+		Long: `arcwright plans the microphones of a jet-noise or exhaust-noise test from one
+layout file: it predicts the plume for every operating point of the test matrix
+(exit state, potential core, shear layer, velocity and temperature decay), places
+polar arcs, sidelines, near-field lines, rings and single stations, checks each
+one for clearance from the fast and hot exhaust, from walls, wedges, stands and
+obstacles, for line of sight and for the acoustic far field, and writes a
+to-scale PDF floor layout sheet with the cautions, plus CSV, GeoJSON and JSON.
+
+Start with 'arcwright init' for a commented starter layout, 'arcwright validate'
+to check it, and 'arcwright plan' to place and check the stations.
+
+The zones are predictions from published correlations with conservative
+margins, not measurements. Follow your facility's safety procedures, local
+codes and licensed practice.`,
+		Version:       version,
+		SilenceErrors: true,
+		SilenceUsage:  true,
+	}
+	root.SetOut(stdout)
+	root.SetErr(stderr)
+	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error {
+		return usageError{fmt.Errorf("%s: %w", c.CommandPath(), err)}
+	})
+	root.SetVersionTemplate("arcwright {{.Version}}\n")
+	root.AddCommand(
+		newPlumeCommand(stdout),
+		newAirCommand(stdout),
+		newValidateCommand(stdout),
+		newInitCommand(stdout),
+		newPlanCommand(stdout),
+		newCheckCommand(stdout),
+	)
+	return root
+}
