@@ -27,9 +27,8 @@ var (
 // LoadAsBuilt reads the station positions measured after set-up from the
 // CSV file at path, for planner.Request.AsBuilt; see [DecodeAsBuilt] for
 // the format. req is the request decoded from the layout: a bare number is
-// read in the length unit of the layout file req.Source (metres when that
-// file cannot be read again), and heights are checked against the cell's
-// ceiling. A file that cannot be read gives an Errors value of one problem
+// read in the layout's length unit (req.LengthUnit), and heights are
+// checked against the cell's ceiling. A file that cannot be read gives an Errors value of one problem
 // wrapping [ErrRead].
 func LoadAsBuilt(path string, req *planner.Request) (map[string]planner.Placement, error) {
 	data, err := os.ReadFile(path)
@@ -41,7 +40,7 @@ func LoadAsBuilt(path string, req *planner.Request) (map[string]planner.Placemen
 		}
 		return nil, Errors{{File: path, Msg: "cannot read the file: " + msg, kind: ErrRead, cause: err}}
 	}
-	return DecodeAsBuilt(path, data, layoutLengthUnit(req.Source), req.Cell.Ceiling)
+	return DecodeAsBuilt(path, data, req.LengthUnit, req.Cell.Ceiling)
 }
 
 // DecodeAsBuilt reads measured station positions from CSV data; name is
@@ -214,22 +213,4 @@ func (d *decoder) csvError(err error) {
 		return
 	}
 	d.add(ErrSyntax, err, 0, "", "bad CSV: "+err.Error())
-}
-
-// layoutLengthUnit returns the unit of bare lengths of the layout file at
-// path, or m when the file cannot be read or gives no usable unit.
-func layoutLengthUnit(path string) string {
-	data, err := os.ReadFile(path)
-	if err != nil {
-		return "m"
-	}
-	var doc struct {
-		Units struct {
-			Length string `yaml:"length"`
-		} `yaml:"units"`
-	}
-	if yaml.Unmarshal(data, &doc) != nil || !contains(lengthUnits, doc.Units.Length) {
-		return "m"
-	}
-	return doc.Units.Length
 }

@@ -119,9 +119,9 @@ func TestLoadAsBuilt(t *testing.T) {
 	checkF(t, "ref-side.X", got["ref-side"].Mic.X, 3.01)
 	checkF(t, "ref-side.Y", got["ref-side"].Mic.Y, 0.59)
 
-	t.Run("layout not on disk", func(t *testing.T) {
+	t.Run("request without a length unit reads metres", func(t *testing.T) {
 		r := *req
-		r.Source = filepath.Join(dir, "gone.yaml")
+		r.LengthUnit = ""
 		p := filepath.Join(dir, "built2.csv")
 		if err := os.WriteFile(p, []byte("id,x,y,z\nref-side,3010,590,1200 mm\n"), 0o644); err != nil {
 			t.Fatal(err)

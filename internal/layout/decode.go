@@ -77,6 +77,7 @@ func (d *decoder) request(root *yaml.Node) *planner.Request {
 		}
 	}
 	req.Units = d.unitsSection(top)
+	req.LengthUnit = d.lenUnit
 	req.Title = d.titleSection(top)
 	if n := top.need("polar_angle", "from_jet_axis or from_inlet (no default: an angle range means opposite things under the two conventions)"); n != nil {
 		if c, ok := d.choice(n, "polar_angle", []string{"from_jet_axis", "from_inlet"}); ok {

@@ -252,7 +252,11 @@ type SheetOptions struct {
 // Request is everything the planner needs, in SI units, as decoded and
 // validated by the layout package.
 type Request struct {
-	Source     string // layout file name, for messages and the sheet
+	Source string // layout file name, for messages and the sheet
+	// LengthUnit is the unit the layout reads bare lengths in ("m", "mm",
+	// "cm", "in", "ft"), for companion files such as as-built positions;
+	// the planner does not use it.
+	LengthUnit string
 	Title      Title
 	Units      units.System
 	Convention Convention
