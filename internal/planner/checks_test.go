@@ -172,3 +172,30 @@ func TestZoneClearance(t *testing.T) {
 		t.Errorf("to the side: blocked by %v", p.Stations[0].Reasons)
 	}
 }
+
+// TestImpingement checks the warning that a zone reaches a wall, the floor
+// or the ceiling before any collector: in a 10 m room the 5 m/s zone of a
+// 25 mm jet reaches the wall 5 m downstream and, with the axis 0.3 m up,
+// the floor; a collector 2 m downstream that captures the plume silences
+// both.
+func TestImpingement(t *testing.T) {
+	req := point(r3.Vec{X: 4, Y: 8, Z: 1.5})
+	req.Exit.Exit.Z = 0.3
+	p := mustPlan(t, req)
+	all := strings.Join(p.Warnings, "\n")
+	for _, want := range []string{"velocity zone reaches the walls", "velocity zone reaches the floor"} {
+		if !strings.Contains(all, want) {
+			t.Errorf("warnings lack %q:\n%s", want, all)
+		}
+	}
+	req.Cell.Collector = &geometry.Collector{Inlet: r3.Vec{X: 7, Y: 5, Z: 0.3}, Diameter: 3}
+	p = mustPlan(t, req)
+	if p.Points[0].Capture == Blocked {
+		t.Fatalf("collector does not capture: %s", p.Points[0].CaptureReason)
+	}
+	for _, w := range p.Warnings {
+		if strings.Contains(w, "reaches the walls") {
+			t.Errorf("captured plume still warned: %s", w)
+		}
+	}
+}
