@@ -25,6 +25,7 @@ type planDoc struct {
 	TitleBlock     titleDoc        `json:"title_block"`
 	Convention     string          `json:"polar_angle_convention"`
 	GoverningPoint *string         `json:"governing_point"`
+	GoverningHot   *string         `json:"governing_hot_point"`
 	Counts         countsDoc       `json:"counts"`
 	Warnings       []string        `json:"warnings"`
 	Stations       []stationDoc    `json:"stations"`
@@ -167,6 +168,10 @@ func newPlanDoc(p *planner.Plan) *planDoc {
 	if len(p.Points) > 0 {
 		name := p.Points[p.Governing].Name
 		d.GoverningPoint = &name
+		if p.GoverningHot >= 0 && p.GoverningHot < len(p.Points) {
+			hot := p.Points[p.GoverningHot].Name
+			d.GoverningHot = &hot
+		}
 	}
 	for i := range p.Stations {
 		d.Stations[i] = newStationDoc(&p.Stations[i])

@@ -190,7 +190,11 @@ type Plan struct {
 	Points  []PointResult
 	// Governing is the index in Points of the operating point with the
 	// largest conservative velocity zone: the one the sheet draws.
-	Governing  int
+	Governing int
+	// GoverningHot is the index in Points of the operating point with the
+	// longest conservative hot zone (Governing when no point has one): the
+	// hot zone the sheet draws.
+	GoverningHot int
 	Arrays     []ArrayResult
 	Stations   []Station
 	Absorption []AbsorptionRow

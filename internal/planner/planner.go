@@ -29,7 +29,8 @@ func New(req *Request) (*Plan, error) {
 	if err != nil {
 		return nil, err
 	}
-	plan := &Plan{Request: req, Points: points, Governing: governing(points)}
+	plan := &Plan{Request: req, Points: points}
+	plan.Governing, plan.GoverningHot = governing(points)
 
 	atm := acoustics.Atmosphere{Temperature: req.Ambient.Temperature, RelativeHumidity: req.Ambient.Humidity, Pressure: req.Ambient.Pressure}
 	if err := atm.Validate(); err != nil {

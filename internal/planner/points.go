@@ -80,17 +80,23 @@ func capture(req *Request, p *PointResult) (Verdict, string, float64) {
 	return Blocked, desc + fmt.Sprintf(": the plume does not fit the collector (%.0f %% of the inlet); exhaust will spill into the cell", 100*ratio), d
 }
 
-// governing returns the index of the point whose conservative velocity zone
-// has the largest meridian area.
-func governing(points []PointResult) int {
-	best, area := 0, -1.0
+// governing returns the index of the point whose conservative velocity
+// zone has the largest meridian area, and of the point whose conservative
+// hot zone is the longest (the first of them when none is hot).
+func governing(points []PointResult) (vel, hot int) {
+	area, length := -1.0, 0.0
 	for i := range points {
-		a := outlineArea(points[i].Velocity()) + outlineArea(points[i].Hot())
-		if a > area {
-			best, area = i, a
+		if a := outlineArea(points[i].Velocity()); a > area {
+			vel, area = i, a
 		}
 	}
-	return best
+	hot = vel
+	for i := range points {
+		if l := points[i].Hot().Length; l > length {
+			hot, length = i, l
+		}
+	}
+	return vel, hot
 }
 
 // outlineArea is the area of an envelope's meridian outline, m².

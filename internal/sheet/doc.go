@@ -32,9 +32,9 @@
 // The plan and the elevation draw the conservative velocity zone and the
 // nominal potential core of the governing operating point
 // (Plan.Points[Plan.Governing], the one with the largest velocity zone),
-// each zone with its margin band. The hot zone drawn is that of the point
-// with the longest conservative hot zone, which is the governing point's
-// unless another point runs hotter; the sheet then names that point. Zones
+// each zone with its margin band. The hot zone drawn is that of
+// Plan.GoverningHot, the point with the longest conservative hot zone; when
+// it is not the governing point the sheet names it. Zones
 // are clipped to the view frames, with a note saying how far they reach.
 //
 // # Labels

@@ -41,7 +41,7 @@ func newFixture(t testing.TB, req *planner.Request) *fixture {
 	t.Helper()
 	p := &planner.Plan{Request: req}
 	lim := jet.Limits{Velocity: req.Limits.Velocity, Temperature: req.Limits.Temperature}
-	best := -1.0
+	best, hottest := -1.0, 0.0
 	for i, c := range req.Points {
 		c.Ambient = req.Ambient.JetAmbient()
 		pl, err := jet.NewPlume(req.Nozzle, c, lim)
@@ -66,6 +66,9 @@ func newFixture(t testing.TB, req *planner.Request) *fixture {
 		p.Points = append(p.Points, pr)
 		if l := pl.Envelope(jet.VelocityZone, jet.Conservative).Length; l > best {
 			best, p.Governing = l, i
+		}
+		if l := pl.Envelope(jet.HotZone, jet.Conservative).Length; l > hottest {
+			hottest, p.GoverningHot = l, i
 		}
 	}
 	return &fixture{t: t, plan: p}

@@ -59,6 +59,9 @@ func validate(p *planner.Plan) error {
 	if p.Governing < 0 || p.Governing >= len(p.Points) {
 		return bad("Plan.Governing is %d, want an index into Plan.Points (0 to %d)", p.Governing, len(p.Points)-1)
 	}
+	if p.GoverningHot < 0 || p.GoverningHot >= len(p.Points) {
+		return bad("Plan.GoverningHot is %d, want an index into Plan.Points (0 to %d)", p.GoverningHot, len(p.Points)-1)
+	}
 	for i := range p.Points {
 		if err := validatePoint(&p.Points[i], i); err != nil {
 			return err

@@ -116,19 +116,13 @@ type zoneSet struct {
 }
 
 // zones returns what the sheet draws of the plume: the governing point's
-// velocity zone and potential core, and the hot zone of the point with the
-// longest conservative hot zone, which is the governing point's unless
-// another point of the test matrix runs hotter (the governing point is the
-// one with the largest velocity zone, often a cold one).
+// velocity zone and potential core, and the hot zone of the plan's
+// GoverningHot point, the longest hot zone of the test matrix (the
+// governing point is the one with the largest velocity zone, often a cold
+// one).
 func (b *builder) zones() zoneSet {
 	g := b.gov
-	hp := g
-	for i := range b.plan.Points {
-		p := &b.plan.Points[i]
-		if p.Plume.Envelope(jet.HotZone, jet.Conservative).Length > hp.Plume.Envelope(jet.HotZone, jet.Conservative).Length {
-			hp = p
-		}
-	}
+	hp := &b.plan.Points[b.plan.GoverningHot]
 	hot := hp.Plume.Envelope(jet.HotZone, jet.Conservative)
 	vel := g.Plume.Envelope(jet.VelocityZone, jet.Conservative)
 	z := zoneSet{
