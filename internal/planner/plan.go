@@ -195,10 +195,10 @@ type Plan struct {
 	// longest conservative hot zone (Governing when no point has one): the
 	// hot zone the sheet draws.
 	GoverningHot int
-	Arrays     []ArrayResult
-	Stations   []Station
-	Absorption []AbsorptionRow
-	Warnings   []string
+	Arrays       []ArrayResult
+	Stations     []Station
+	Absorption   []AbsorptionRow
+	Warnings     []string
 	// Counts of stations by verdict.
 	OK, Warn, Blocked int
 }
