@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"github.com/paulmach/orb"
 	"math"
 	"strconv"
 
@@ -245,7 +246,9 @@ func (v *planView) zoneLabels(z zoneSet) {
 			}
 		}
 	}
-	// zones beyond the frame
+	// zones cut at the boundary of a bounded cell, or running out of the
+	// frame of an open one
+	cell := &v.b.req.Cell
 	var beyond []string
 	for _, zz := range []struct {
 		out  zoneOutline
@@ -255,14 +258,23 @@ func (v *planView) zoneLabels(z zoneSet) {
 		if zz.out == nil {
 			continue
 		}
-		for _, p := range v.ringPts(planRing(fr, zz.out)) {
-			if p.X < v.frame.X || p.X > v.frame.Right() || p.Y < v.frame.Y || p.Y > v.frame.Bottom() {
+		for _, q := range planRing(fr, zz.out) {
+			p := v.t.pt(q[0], q[1])
+			out := p.X < v.frame.X || p.X > v.frame.Right() || p.Y < v.frame.Y || p.Y > v.frame.Bottom()
+			if cell.Bounded() {
+				out = !cell.Contains(orb.Point{q[0], q[1]})
+			}
+			if out {
 				beyond = append(beyond, zz.name+" to "+pr.length(zz.l)+" from the exit")
 				break
 			}
 		}
 	}
 	if len(beyond) == 0 {
+		return
+	}
+	if cell.Bounded() {
+		v.notes = append(v.notes, "The zones are drawn up to the boundary; as free jets they would reach: "+joinAnd(beyond)+" (plus the margin). See the plan's warnings where a zone meets a wall.")
 		return
 	}
 	txt := "zones continue beyond the frame: " + joinAnd(beyond)

@@ -56,6 +56,9 @@ type Shape struct {
 	Points []Pt      `json:"points"`
 	Holes  [][]Pt    `json:"holes,omitempty"`
 	R      float64   `json:"r,omitempty"` // circle radius, mm
+	// Clip, when it has three points or more, is a polygon the shape is
+	// drawn inside of (a zone is cut at the walls of a bounded cell).
+	Clip []Pt `json:"clip,omitempty"`
 }
 
 // Text is one line of text: its baseline starts at (X, Y), mm.

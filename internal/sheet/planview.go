@@ -215,16 +215,27 @@ func (v *planView) cell() {
 // the frame.
 func (v *planView) drawZones(z zoneSet) {
 	fr := v.b.req.Exit
+	// in a bounded cell the zones stop at the boundary: past it there is
+	// no free jet to draw (the planner warns where a zone meets a wall)
+	var clip []Pt
+	if c := &v.b.req.Cell; c.Bounded() {
+		clip = v.ringPts(orbPts(c.Boundary))
+	}
+	zone := func(s Style, o zoneOutline) {
+		sh := poly(s, v.ringPts(planRing(fr, o)))
+		sh.Clip = clip
+		v.shapes = append(v.shapes, sh)
+	}
 	for _, o := range []zoneOutline{z.velM, z.hotM} {
 		if o != nil {
-			v.shapes = append(v.shapes, poly(StyleMargin, v.ringPts(planRing(fr, o))))
+			zone(StyleMargin, o)
 		}
 	}
 	if z.vel != nil {
-		v.shapes = append(v.shapes, poly(StyleVelocity, v.ringPts(planRing(fr, z.vel))))
+		zone(StyleVelocity, z.vel)
 	}
 	if z.hot != nil {
-		v.shapes = append(v.shapes, poly(StyleHot, v.ringPts(planRing(fr, z.hot))))
+		zone(StyleHot, z.hot)
 	}
 	if z.core > 0 {
 		core := zoneOutline{{0, 0}, {0, z.exitR}, {z.core, 0}}

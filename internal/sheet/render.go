@@ -129,6 +129,17 @@ func (r *renderer) shape(s Shape) {
 		return
 	}
 	pdf := r.pdf
+	if len(s.Clip) >= 3 {
+		pts := make([]gofpdf.PointType, len(s.Clip))
+		for i, p := range s.Clip {
+			pts[i] = gofpdf.PointType{X: p.X, Y: p.Y}
+		}
+		pdf.ClipPolygon(pts, false)
+		defer func() {
+			pdf.ClipEnd()
+			r.reset()
+		}()
+	}
 	if d.Fill != nil && (r.fill == nil || *r.fill != *d.Fill) {
 		pdf.SetFillColor(d.Fill[0], d.Fill[1], d.Fill[2])
 		r.fill = d.Fill
