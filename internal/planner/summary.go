@@ -184,8 +184,19 @@ func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
 	w = append(w, atm.Warnings()...)
 	for _, p := range ck.points {
 		for _, f := range p.Flags {
-			if f.Kind == jet.FlagBuoyant || f.Kind == jet.FlagLaminar {
+			switch f.Kind {
+			case jet.FlagLaminar:
 				w = append(w, p.Name+": "+f.String())
+			case jet.FlagBuoyant:
+				// in the layout's units (the model's own text is in metres)
+				b := p.Plume.Buoyancy()
+				dir := "up"
+				if b.ReducedGravity < 0 {
+					dir = "down"
+				}
+				zone := math.Max(p.Velocity().Length, p.Hot().Length)
+				w = append(w, fmt.Sprintf("%s: buoyant: the %s zone reaches beyond %s, where buoyancy starts to bend the jet %s (x_b = 0.53, Chen & Rodi 1980; momentum length %s); the zones are drawn straight and do not follow the bend",
+					p.Name, ck.m(zone), ck.m(b.Onset), dir, ck.m(b.MomentumLength)))
 			}
 		}
 		if p.Capture != OK {
