@@ -195,19 +195,63 @@ func (p *Plume) buildEnvelopes() {
 }
 
 // conservative builds a conservative envelope: the largest of the nominal
-// contour, the conservative contour and the lip-edge construction, the
-// latter only until the conservative contour catches up with it.
+// contour, the conservative contour and the lip-edge construction. The
+// lip edge describes the initial mixing layer only: it is used until the
+// conservative contour catches up with it or reaches its widest point,
+// whichever comes first, and never wider than that widest point (a zone
+// that ends before the developed field outgrows the lip edge would
+// otherwise end in a cliff at the lip edge's width).
 func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons func(float64) float64, slope float64) Envelope {
 	length := math.Max(nomTip, consTip)
-	catch := catchUp(func(x float64) float64 { return p.nearEdge(x, slope) }, cons, consTip)
+	far := func(x float64) float64 { return max(nom(x), cons(x)) }
+	xPeak, rPeak := widest(far, length)
+	near := func(x float64) float64 { return p.nearEdge(x, slope) }
+	end := math.Min(catchUp(near, cons, consTip), xPeak)
 	radius := func(x float64) float64 {
-		r := max(nom(x), cons(x))
-		if x <= catch {
-			r = max(r, p.nearEdge(x, slope))
+		r := far(x)
+		if x <= end {
+			r = max(r, min(near(x), rPeak))
 		}
 		return r
 	}
-	return newEnvelope(z, Conservative, limit, length, radius, p.cons.lc, p.nom.lc, catch)
+	return newEnvelope(z, Conservative, limit, length, radius, p.cons.lc, p.nom.lc, end)
+}
+
+// widest returns where on [0, length] f is largest, and its value: a scan
+// of 64 points polished by golden-section search.
+func widest(f func(float64) float64, length float64) (x, r float64) {
+	if length <= 0 {
+		return 0, f(0)
+	}
+	const n = 64
+	best := 0
+	vals := [n + 1]float64{}
+	for i := 0; i <= n; i++ {
+		vals[i] = f(length * float64(i) / n)
+		if vals[i] > vals[best] {
+			best = i
+		}
+	}
+	lo, hi := length*float64(max(best-1, 0))/n, length*float64(min(best+1, n))/n
+	const g = 0.6180339887498949
+	a, b := hi-g*(hi-lo), lo+g*(hi-lo)
+	fa, fb := f(a), f(b)
+	for i := 0; i < 30; i++ {
+		if fa > fb {
+			hi, b, fb = b, a, fa
+			a = hi - g*(hi-lo)
+			fa = f(a)
+		} else {
+			lo, a, fa = a, b, fb
+			b = lo + g*(hi-lo)
+			fb = f(b)
+		}
+	}
+	x = (lo + hi) / 2
+	if r = f(x); r < vals[best] {
+		return length * float64(best) / n, vals[best]
+	}
+	return x, r
 }
 
 // catchUp returns where far(x) first reaches near(x), for a lip-edge

@@ -342,3 +342,35 @@ func contains(s, sub string) bool {
 	}
 	return false
 }
+
+// TestNoCliffAtTheTip checks that a conservative zone closes toward its
+// tip instead of ending at full width, and that its width changes smoothly
+// with NPR: the lip-edge construction once ran to the tip of short hot
+// zones of under-expanded jets, doubling their width across NPR 2.
+func TestNoCliffAtTheTip(t *testing.T) {
+	for _, d := range []float64{0.05, 0.9} {
+		for _, t0 := range []float64{300, 600, 900, 1200} {
+			prev := map[Zone]float64{}
+			for npr := 1.5; npr <= 3.0; npr += 0.01 {
+				c := Condition{Primary: Stream{NPR: npr, TotalTemperature: t0}, Ambient: StandardAmbient()}
+				p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: d}, c, DefaultLimits())
+				if err != nil {
+					t.Fatal(err)
+				}
+				for _, z := range []Zone{VelocityZone, HotZone} {
+					e := p.Envelope(z, Conservative)
+					if e.Length == 0 {
+						continue
+					}
+					if r := e.Radius(0.98 * e.Length); r > 0.6*e.MaxRadius {
+						t.Fatalf("D %g T0 %g NPR %.2f %v: radius %.3g at 98 %% of the length, widest %.3g: a cliff at the tip", d, t0, npr, z, r, e.MaxRadius)
+					}
+					if q := prev[z]; q > 0 && math.Abs(e.MaxRadius/q-1) > 0.05 {
+						t.Fatalf("D %g T0 %g NPR %.2f %v: widest radius jumps from %.4g to %.4g", d, t0, npr, z, q, e.MaxRadius)
+					}
+					prev[z] = e.MaxRadius
+				}
+			}
+		}
+	}
+}
