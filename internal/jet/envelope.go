@@ -143,6 +143,12 @@ func segmentDistanceSquared(x, r float64, a, b [2]float64) float64 {
 // newEnvelope samples radius on [0, length] into an outline. kinks are axial
 // positions where the radius has a corner; they become vertices.
 func newEnvelope(z Zone, v Variant, limit, length float64, radius func(float64) float64, kinks ...float64) Envelope {
+	return newEnvelopePeak(z, v, limit, length, radius, nil, kinks...)
+}
+
+// newEnvelopePeak is newEnvelope for a radius whose widest point is known
+// (x, r): the search for it is skipped.
+func newEnvelopePeak(z Zone, v Variant, limit, length float64, radius func(float64) float64, peak *[2]float64, kinks ...float64) Envelope {
 	e := Envelope{Zone: z, Variant: v, Limit: limit, radius: radius}
 	if !(length > 0) || math.IsInf(length, 0) {
 		return e
@@ -189,7 +195,11 @@ func newEnvelope(z Zone, v Variant, limit, length float64, radius func(float64) 
 		}
 		prevX, prevR = x, r
 	}
-	e.refineMax()
+	if peak != nil && peak[1] >= e.MaxRadius {
+		e.MaxRadiusAt, e.MaxRadius = peak[0], peak[1]
+	} else {
+		e.refineMax()
+	}
 	return e
 }
 

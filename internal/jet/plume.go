@@ -174,8 +174,16 @@ func (p *Plume) buildEnvelopes() {
 		slopeU = math.Erfinv(1-2*eps) / p.cons.m.Sigma
 	}
 	nomTipU := p.nom.tipU(uLim)
+	// where the conservative field is at least as fast, as wide and with as
+	// wide a core as the nominal one, with the same profile shape, its
+	// contour contains the nominal one and the nominal contour (a
+	// logarithm) need not be evaluated
+	same := p.nom.su == p.cons.su
+	domU := func(x float64) bool {
+		return same && p.cons.uc(x) >= p.nom.uc(x) && p.cons.rc(x) >= p.nom.rc(x) && p.cons.m.Tail*p.cons.w(x) >= p.nom.w(x)
+	}
 	p.env[0][0] = newEnvelope(VelocityZone, Nominal, uLim, nomTipU, nomU, p.nom.lc)
-	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), nomU, consU, slopeU)
+	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), nomU, consU, domU, slopeU)
 
 	// hot zone, on the excess total temperature
 	tLim := lim.Temperature
@@ -190,8 +198,13 @@ func (p *Plume) buildEnvelopes() {
 	consT := func(x float64) float64 { return p.cons.contourT(x, eps, p.cons.m.Tail) }
 	slopeT := p.cons.m.Lambda * math.Erfinv(1-2*eps) / p.cons.m.Sigma
 	nomTipT := p.nom.tipT(eps)
+	sameT := p.nom.st == p.cons.st
+	domT := func(x float64) bool {
+		return sameT && p.cons.thetac(x) >= p.nom.thetac(x) && p.cons.rc(x) >= p.nom.rc(x) &&
+			p.cons.m.Tail*p.cons.lambda*p.cons.w(x) >= p.nom.lambda*p.nom.w(x)
+	}
 	p.env[1][0] = newEnvelope(HotZone, Nominal, tLim, nomTipT, nomT, p.nom.lc)
-	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), nomT, consT, slopeT)
+	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), nomT, consT, domT, slopeT)
 }
 
 // conservative builds a conservative envelope: the largest of the nominal
@@ -201,9 +214,14 @@ func (p *Plume) buildEnvelopes() {
 // whichever comes first, and never wider than that widest point (a zone
 // that ends before the developed field outgrows the lip edge would
 // otherwise end in a cliff at the lip edge's width).
-func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons func(float64) float64, slope float64) Envelope {
+func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons func(float64) float64, dominates func(float64) bool, slope float64) Envelope {
 	length := math.Max(nomTip, consTip)
-	far := func(x float64) float64 { return max(nom(x), cons(x)) }
+	far := func(x float64) float64 {
+		if dominates(x) {
+			return cons(x)
+		}
+		return max(nom(x), cons(x))
+	}
 	xPeak, rPeak := widest(far, length)
 	near := func(x float64) float64 { return p.nearEdge(x, slope) }
 	end := math.Min(catchUp(near, cons, consTip), xPeak)
@@ -214,16 +232,18 @@ func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons f
 		}
 		return r
 	}
-	return newEnvelope(z, Conservative, limit, length, radius, p.cons.lc, p.nom.lc, end)
+	// the lip edge is never wider than the contour's widest point, so
+	// that point is the zone's widest
+	return newEnvelopePeak(z, Conservative, limit, length, radius, &[2]float64{xPeak, rPeak}, p.cons.lc, p.nom.lc, end)
 }
 
 // widest returns where on [0, length] f is largest, and its value: a scan
-// of 64 points polished by golden-section search.
+// of 32 points polished by golden-section search.
 func widest(f func(float64) float64, length float64) (x, r float64) {
 	if length <= 0 {
 		return 0, f(0)
 	}
-	const n = 64
+	const n = 32
 	best := 0
 	vals := [n + 1]float64{}
 	for i := 0; i <= n; i++ {
@@ -236,7 +256,7 @@ func widest(f func(float64) float64, length float64) (x, r float64) {
 	const g = 0.6180339887498949
 	a, b := hi-g*(hi-lo), lo+g*(hi-lo)
 	fa, fb := f(a), f(b)
-	for i := 0; i < 30; i++ {
+	for i := 0; i < 20; i++ {
 		if fa > fb {
 			hi, b, fb = b, a, fa
 			a = hi - g*(hi-lo)
@@ -263,7 +283,7 @@ func catchUp(near, far func(float64) float64, end float64) float64 {
 	if end <= 0 {
 		return 0
 	}
-	const n = 64
+	const n = 32
 	prev := 0.0
 	for i := 1; i <= n; i++ {
 		t := float64(i) / n
