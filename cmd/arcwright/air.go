@@ -29,9 +29,20 @@ type AirOptions struct {
 
 // AddFlags binds the options to fs.
 func (o *AirOptions) AddFlags(fs *pflag.FlagSet) {
-	fs.Var(newQuantity(units.Temperature, "", &o.Temperature, ""), "temperature", "air temperature, e.g. 20C (without a layout)")
-	fs.Var(newQuantity(units.Fraction, "%", &o.Humidity, ""), "humidity", "relative humidity, e.g. 70% (without a layout)")
-	fs.Var(newQuantity(units.Pressure, "", &o.Pressure, "101.325kPa"), "pressure", "air pressure (without a layout)")
+	temp := newQuantity(units.Temperature, "", &o.Temperature, "")
+	temp.doubt = doubtful(150, 400, "K")
+	fs.Var(temp, "temperature", "air temperature, e.g. 20C (without a layout)")
+	hum := newQuantity(units.Fraction, "%", &o.Humidity, "")
+	hum.doubt = func(v float64) string {
+		if v <= 0.01 {
+			return strconv.FormatFloat(100*v, 'g', 4, 64) + " % relative humidity (a bare number is in percent)"
+		}
+		return ""
+	}
+	fs.Var(&percentFlag{hum}, "humidity", "relative humidity in percent, e.g. 70% (without a layout)")
+	pres := newQuantity(units.Pressure, "", &o.Pressure, "101.325kPa")
+	pres.doubt = doubtful(10e3, 200e3, "Pa")
+	fs.Var(pres, "pressure", "air pressure (without a layout)")
 	fs.Var(newQuantity(units.Frequency, "", &o.From, "50Hz"), "from", "lowest band centre (without a layout)")
 	fs.Var(newQuantity(units.Frequency, "", &o.To, "100kHz"), "to", "highest band centre (without a layout)")
 	fs.Var(&quantityList{dim: units.Length, values: &o.Distances}, "distance", "paths to give the loss over, e.g. 3m,5m (without a layout)")
@@ -58,7 +69,7 @@ Examples:
   arcwright air --temperature 20C --humidity 70% --from 1kHz --to 80kHz --distance 3m,5m --format csv
 
 Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
-		Args: cobra.MaximumNArgs(1),
+		Args: atMostOne("layout file"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			return runAir(o, cmd.Flags(), args, stdout)
 		},
@@ -90,18 +101,19 @@ func runAir(o *AirOptions, fs *pflag.FlagSet, args []string, w io.Writer) error 
 		}
 		atm := acoustics.Atmosphere{Temperature: o.Temperature, RelativeHumidity: 100 * o.Humidity, Pressure: o.Pressure}
 		if err := atm.Validate(); err != nil {
-			return err
+			return fmt.Errorf("--temperature %s, --humidity %s, --pressure %s: %w", units.FormatTemperature(atm.Temperature, units.Metric),
+				strconv.FormatFloat(atm.RelativeHumidity, 'g', 4, 64)+" %", units.FormatPressure(atm.Pressure, units.Metric), err)
 		}
 		bands, err := acoustics.ThirdOctaveBands(o.From, o.To)
 		if err != nil {
 			return fmt.Errorf("--from/--to: %w", err)
 		}
-		tab = airTable{Atmosphere: atm}
+		tab = airTable{Atmosphere: atm, Paths: []airPath{}, Rows: []airRow{}}
 		for _, d := range o.Distances {
 			tab.Paths = append(tab.Paths, airPath{Label: units.FormatLength(d, units.Metric), Metres: d})
 		}
 		for _, b := range bands {
-			row := airRow{Nominal: b.Nominal, Centre: b.Centre, PerM: atm.Absorption(b.Centre)}
+			row := airRow{Nominal: b.Nominal, Centre: b.Centre, PerM: atm.Absorption(b.Centre), Loss: []float64{}}
 			for _, d := range o.Distances {
 				row.Loss = append(row.Loss, row.PerM*d)
 			}
@@ -159,7 +171,11 @@ func airFromPlan(p *planner.Plan) airTable {
 		if len(p.Absorption) > 0 && p.Absorption[0].PerM > 0 {
 			d = p.Absorption[0].ArrayDB[i] / p.Absorption[0].PerM
 		}
-		t.Paths = append(t.Paths, airPath{Label: arr.Name + " " + units.FormatLength(d, p.Request.Units), Metres: d})
+		label := arr.Name + " " + units.FormatLength(d, p.Request.System())
+		if arr.Kind != planner.Arc {
+			label += " (mean)"
+		}
+		t.Paths = append(t.Paths, airPath{Label: label, Metres: d})
 	}
 	for _, r := range p.Absorption {
 		t.Rows = append(t.Rows, airRow{Nominal: r.Band.Nominal, Centre: r.Band.Centre, PerM: r.PerM, Loss: r.ArrayDB})
@@ -187,12 +203,12 @@ func airCSV(w io.Writer, t airTable) error {
 
 func airText(w io.Writer, t airTable) error {
 	a := t.Atmosphere
-	fmt.Fprintf(w, "Atmospheric absorption, ISO 9613-1:1993, at %.1f °C, %.0f %% relative humidity, %.2f kPa\n",
+	fmt.Fprintf(w, "Atmospheric absorption, ISO 9613-1:1993, at %.1f °C, %.4g %% relative humidity, %.2f kPa\n",
 		a.Temperature-273.15, a.RelativeHumidity, a.Pressure/1000)
 	for _, s := range a.Warnings() {
 		fmt.Fprintln(w, "  warning: "+s)
 	}
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', tabwriter.AlignRight)
+	tw := newTable(w, tabwriter.AlignRight)
 	fmt.Fprint(tw, "band\tcentre (Hz)\tdB/m\tdB/100 m\t")
 	for _, p := range t.Paths {
 		fmt.Fprintf(tw, "%s\t", p.Label)
@@ -207,3 +223,8 @@ func airText(w io.Writer, t airTable) error {
 	}
 	return tw.Flush()
 }
+
+// percentFlag shows a fraction flag's type as "percent" in the help.
+type percentFlag struct{ *quantityFlag }
+
+func (p *percentFlag) Type() string { return "percent" }

@@ -2,6 +2,7 @@ package main
 
 import (
 	"fmt"
+	"strconv"
 	"strings"
 
 	"github.com/spf13/pflag"
@@ -17,6 +18,9 @@ type quantityFlag struct {
 	value *float64
 	text  string
 	set   bool
+	// doubt, when set, returns why a bare number is probably a slip (it
+	// is read in SI units, and a diameter of "50.8" is 50.8 m), or "".
+	doubt func(v float64) string
 }
 
 func newQuantity(dim units.Dim, bare string, value *float64, def string) *quantityFlag {
@@ -38,8 +42,39 @@ func (q *quantityFlag) Set(s string) error {
 	if err != nil {
 		return err
 	}
+	if _, perr := strconv.ParseFloat(strings.TrimSpace(s), 64); perr == nil && q.doubt != nil {
+		if why := q.doubt(v); why != "" {
+			return fmt.Errorf("%q is read as %s, which is implausible here; give a unit, e.g. %s", s, why, q.example())
+		}
+	}
 	*q.value, q.text, q.set = v, s, true
 	return nil
+}
+
+// example suggests a value with a unit for q's dimension.
+func (q *quantityFlag) example() string {
+	switch q.dim {
+	case units.Length:
+		return "50.8mm or 2in"
+	case units.Temperature:
+		return "15C or 800K"
+	case units.Pressure:
+		return "101.3kPa"
+	case units.Fraction:
+		return "70%"
+	}
+	return "a number with its unit"
+}
+
+// doubtful returns a doubt function for quantities outside [lo, hi] (SI),
+// naming the value in the SI unit sym.
+func doubtful(lo, hi float64, sym string) func(float64) string {
+	return func(v float64) string {
+		if v < lo || v > hi {
+			return strconv.FormatFloat(v, 'g', 6, 64) + " " + sym + " (a bare number is in SI units)"
+		}
+		return ""
+	}
 }
 
 // quantityList is a comma-separated list of quantities ("0.5m,1m,2 m").

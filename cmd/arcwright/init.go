@@ -27,7 +27,7 @@ An existing file is not overwritten unless --force is given.
 
 Exit status: 0 on success, 1 if the file exists or cannot be written, 2 on a
 bad command line.`,
-		Args: cobra.MaximumNArgs(1),
+		Args: atMostOne("file name"),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			path := "layout.yaml"
 			if len(args) == 1 {

@@ -326,6 +326,15 @@ func TestCheck(t *testing.T) {
 	if code != exitBlocked || !strings.Contains(out, "S-03") || !strings.Contains(out, "blocked") {
 		t.Errorf("as-built in the jet: exit %d\n%s%s", code, out, errOut)
 	}
+	// the station CSV that plan writes reads back as an as-built file
+	exported := filepath.Join(dir, "stations.csv")
+	if _, errOut, code := arc(t, "plan", layoutPath, "--csv", exported); code != 0 {
+		t.Fatalf("plan --csv: %s", errOut)
+	}
+	out, errOut, code = arc(t, "check", layoutPath, "--as-built", exported)
+	if code != exitOK || !strings.Contains(out, "as built, 0") {
+		t.Errorf("exported CSV as as-built: exit %d\n%s%s", code, out, errOut)
+	}
 	os.WriteFile(csvPath, []byte("id,x,y,z\nZ-99,5 m,3 m,1 m\n"), 0o644)
 	if _, errOut, code := arc(t, "check", layoutPath, "--as-built", csvPath); code != exitError || !strings.Contains(errOut, "Z-99") {
 		t.Errorf("unknown station: exit %d, %q", code, errOut)

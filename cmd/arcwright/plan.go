@@ -2,12 +2,12 @@ package main
 
 import (
 	"bytes"
+	"errors"
 	"fmt"
 	"io"
 	"math"
 	"strconv"
 	"strings"
-	"text/tabwriter"
 	"time"
 
 	"github.com/spf13/cobra"
@@ -66,7 +66,7 @@ Examples:
 Exit status: 0 when the plan is made (blocked stations are part of the
 answer; use 'arcwright check' as a gate), 1 on bad input or a failed write,
 2 on a bad command line.`,
-		Args: cobra.ExactArgs(1),
+		Args: oneLayout,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			o.Layout = args[0]
 			return runPlan(o, stdout)
@@ -107,6 +107,9 @@ func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error)
 		}
 	}
 	p, err := planner.New(req)
+	if errors.Is(err, planner.ErrAsBuilt) {
+		return nil, fmt.Errorf("%s: %w", asBuilt, err)
+	}
 	if err != nil {
 		return nil, fmt.Errorf("%s: %w", path, err)
 	}
@@ -180,7 +183,7 @@ func planText(w io.Writer, p *planner.Plan) {
 	fmt.Fprintf(w, "polar angles %s (%s)\n\n", conv, conv.Symbol())
 
 	fmt.Fprintln(w, "Operating points")
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	tw := newTable(w, 0)
 	fmt.Fprintln(tw, "  point\tNPR\tMj\tUj\tT0\tcore\tvelocity zone\thot zone\tcollector\t")
 	for _, pt := range p.Points {
 		zone := func(e *jet.Envelope) string {
@@ -239,7 +242,7 @@ func planText(w io.Writer, p *planner.Plan) {
 	}
 	if len(attention) > 0 {
 		fmt.Fprintln(w, "\nStations that are not ok (first reason; the sheet and exports list all)")
-		tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+		tw = newTable(w, 0)
 		for _, s := range attention {
 			more := ""
 			if len(s.Reasons) > 1 {

@@ -40,6 +40,14 @@ func (o *PlumeOptions) AddFlags(fs *pflag.FlagSet) {
 	o.flags = map[string]*quantityFlag{}
 	q := func(name string, dim units.Dim, bare string, v *float64, def, usage string) {
 		f := newQuantity(dim, bare, v, def)
+		switch dim {
+		case units.Length:
+			f.doubt = doubtful(0, 20, "m")
+		case units.Temperature:
+			f.doubt = doubtful(150, 5000, "K")
+		case units.Pressure:
+			f.doubt = doubtful(10e3, 10e6, "Pa")
+		}
 		o.flags[name] = f
 		fs.Var(f, name, usage)
 	}
@@ -87,7 +95,7 @@ Examples:
   arcwright plume --layout layouts/anechoic-model-jet.yaml --point hot-0.9 --format json
 
 Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
-		Args: cobra.NoArgs,
+		Args: noArgs,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			return runPlume(o, cmd.Flags(), stdout)
 		},
@@ -99,6 +107,22 @@ Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
 // plumeInputs turns the options into a nozzle, a condition and limits.
 func plumeInputs(o *PlumeOptions, fs *pflag.FlagSet) (jet.Nozzle, jet.Condition, jet.Limits, units.System, error) {
 	sys := units.Metric
+	if o.Layout == "" && o.Point != "" {
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{errors.New("--point names an operating point of a layout: give --layout too")}
+	}
+	if o.Layout != "" {
+		var ignored []string
+		for _, name := range []string{"nozzle", "diameter", "design-mach", "aspect-ratio", "npr", "total-temperature", "temperature-ratio",
+			"secondary-npr", "secondary-total-temperature", "secondary-temperature-ratio", "secondary-diameter", "gamma", "gas-constant",
+			"ambient-temperature", "ambient-pressure"} {
+			if fs.Changed(name) {
+				ignored = append(ignored, "--"+name)
+			}
+		}
+		if len(ignored) > 0 {
+			return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{fmt.Errorf("%s would be ignored: with --layout the nozzle, the operating point and the ambient come from the layout", strings.Join(ignored, ", "))}
+		}
+	}
 	if o.Layout != "" {
 		req, _, err := layout.Load(o.Layout)
 		if err != nil {
@@ -143,6 +167,22 @@ func plumeInputs(o *PlumeOptions, fs *pflag.FlagSet) (jet.Nozzle, jet.Condition,
 		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{errors.New("give exactly one of --total-temperature and --temperature-ratio (1 for an unheated jet)")}
 	}
 	gas := jet.Gas{Gamma: o.Gamma, R: o.GasConstant}
+	for _, r := range []struct {
+		flag, nozzle string
+	}{{"design-mach", "cd or rectangular"}, {"aspect-ratio", "rectangular"}, {"secondary-npr", "coaxial"}, {"secondary-diameter", "coaxial"},
+		{"secondary-total-temperature", "coaxial"}, {"secondary-temperature-ratio", "coaxial"}} {
+		if fs.Changed(r.flag) && !strings.Contains(r.nozzle, o.Nozzle) {
+			return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{fmt.Errorf("--%s is for --nozzle %s, not %s", r.flag, r.nozzle, o.Nozzle)}
+		}
+	}
+	switch {
+	case o.Nozzle == "cd" && !fs.Changed("design-mach"):
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, missing("design-mach", "the design Mach number of the convergent-divergent nozzle, e.g. --design-mach 1.5")
+	case o.Nozzle == "coaxial" && (!fs.Changed("secondary-npr") || !fs.Changed("secondary-diameter")):
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, missing("secondary-npr and --secondary-diameter", "a coaxial nozzle needs its secondary stream and annulus")
+	case o.Nozzle == "coaxial" && fs.Changed("secondary-total-temperature") == fs.Changed("secondary-temperature-ratio"):
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{errors.New("give exactly one of --secondary-total-temperature and --secondary-temperature-ratio")}
+	}
 	n := jet.Nozzle{Diameter: o.Diameter}
 	switch o.Nozzle {
 	case "convergent":
@@ -258,7 +298,7 @@ func plumeText(w io.Writer, p *jet.Plume, xs []float64, sys units.System) error 
 	T := func(k float64) string { return units.FormatTemperature(k, sys) }
 	V := func(v float64) string { return units.FormatVelocity(v, sys) }
 	fmt.Fprintf(w, "%s nozzle, D %s, NPR %.4g, T0 %s; ambient %s, %s\n\n", n.Kind, L(e.Diameter), c.Primary.NPR, T(e.TotalTemperature), T(c.Ambient.Temperature), units.FormatPressure(c.Ambient.Pressure, sys))
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	tw := newTable(w, 0)
 	fmt.Fprintln(tw, "Fully expanded exit state\t")
 	fmt.Fprintf(tw, "  Mach number Mj\t%.3f\t(exit plane %.3f, design %.3g, %s)\n", e.Mach, e.ExitMach, e.DesignMach, e.Expansion)
 	fmt.Fprintf(tw, "  velocity Uj\t%s\t\n", V(e.Velocity))
@@ -277,7 +317,7 @@ func plumeText(w io.Writer, p *jet.Plume, xs []float64, sys units.System) error 
 	tw.Flush()
 
 	fmt.Fprintln(w, "\nCentreline and mixing layer (nominal)")
-	tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', tabwriter.AlignRight)
+	tw = newTable(w, tabwriter.AlignRight)
 	fmt.Fprintln(tw, "x\tx/Dj\tUc\tUc/Uj\tr½\tT static\tT total\tcore radius\tlayer edge (1 %)\t")
 	for _, x := range xs {
 		ml := p.MixingLayer(x)
@@ -288,7 +328,7 @@ func plumeText(w io.Writer, p *jet.Plume, xs []float64, sys units.System) error 
 
 	lim := p.Limits()
 	fmt.Fprintln(w, "\nZones")
-	tw = tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	tw = newTable(w, 0)
 	fmt.Fprintln(tw, "  zone\tlimit\tlength\twidest radius\tat x\t")
 	for _, z := range []struct {
 		name  string

@@ -49,7 +49,7 @@ func run(args []string, stdout, stderr io.Writer) int {
 		for _, e := range le {
 			fmt.Fprintln(stderr, e)
 		}
-		fmt.Fprintf(stderr, "arcwright: %d %s in the layout; nothing was written\n", len(le), plural(len(le), "problem", "problems"))
+		fmt.Fprintf(stderr, "arcwright: %d %s found; fix %s and run again\n", len(le), plural(len(le), "problem", "problems"), plural(len(le), "it", "them"))
 		return exitError
 	}
 	fmt.Fprintln(stderr, "arcwright: "+err.Error())
@@ -59,6 +59,35 @@ func run(args []string, stdout, stderr io.Writer) int {
 		return exitUsage
 	}
 	return exitError
+}
+
+// oneLayout accepts exactly one argument, the layout file.
+func oneLayout(cmd *cobra.Command, args []string) error {
+	switch {
+	case len(args) == 0:
+		return usageError{fmt.Errorf("%s needs the layout file, e.g. '%s layouts/anechoic-model-jet.yaml'", cmd.CommandPath(), cmd.CommandPath())}
+	case len(args) > 1:
+		return usageError{fmt.Errorf("%s takes one layout file, got %d arguments: %s", cmd.CommandPath(), len(args), strings.Join(args, " "))}
+	}
+	return nil
+}
+
+// atMostOne accepts no argument or one.
+func atMostOne(what string) cobra.PositionalArgs {
+	return func(cmd *cobra.Command, args []string) error {
+		if len(args) > 1 {
+			return usageError{fmt.Errorf("%s takes at most one %s, got %d arguments: %s", cmd.CommandPath(), what, len(args), strings.Join(args, " "))}
+		}
+		return nil
+	}
+}
+
+// noArgs accepts no argument.
+func noArgs(cmd *cobra.Command, args []string) error {
+	if len(args) > 0 {
+		return usageError{fmt.Errorf("%s takes no arguments, got %s (quantities go with flags, e.g. --diameter 50.8mm)", cmd.CommandPath(), strings.Join(args, " "))}
+	}
+	return nil
 }
 
 func plural(n int, one, many string) string {
@@ -93,7 +122,7 @@ codes and licensed practice.`,
 	root.SetOut(stdout)
 	root.SetErr(stderr)
 	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error {
-		return usageError{fmt.Errorf("%s: %w", c.CommandPath(), err)}
+		return usageError{fmt.Errorf("%s: %w", strings.TrimPrefix(c.CommandPath(), "arcwright "), err)}
 	})
 	root.SetVersionTemplate("arcwright {{.Version}}\n")
 	root.AddCommand(

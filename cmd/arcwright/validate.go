@@ -4,7 +4,6 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"text/tabwriter"
 
 	"github.com/spf13/cobra"
 
@@ -25,7 +24,7 @@ found is printed with its file, line and key, all of them in one run.
 Every command that reads a layout checks it the same way first.
 
 Exit status: 0 when the layout is valid, 1 otherwise, 2 on a bad command line.`,
-		Args: cobra.ExactArgs(1),
+		Args: oneLayout,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			req, warnings, err := layout.Load(args[0])
 			if err != nil {
@@ -44,7 +43,7 @@ func summary(w io.Writer, req *planner.Request, warnings []layout.Warning) error
 	if req.Title.Title != "" {
 		fmt.Fprintf(w, "  %s — %s\n", req.Title.Title, req.Title.Facility)
 	}
-	tw := tabwriter.NewWriter(w, 2, 4, 2, ' ', 0)
+	tw := newTable(w, 0)
 	cell := &req.Cell
 	size := "open site, no boundary"
 	if cell.Bounded() {
@@ -56,7 +55,13 @@ func summary(w io.Writer, req *planner.Request, warnings []layout.Warning) error
 		ceiling = units.FormatLengthApprox(cell.Ceiling, sys) + " ceiling"
 	}
 	fmt.Fprintf(tw, "  cell\t%s, %s, %s, %s floor\t\n", cell.Kind, size, ceiling, cell.Floor)
-	fmt.Fprintf(tw, "  \t%d obstacles, %d keep-out zones, %d floor marks, collector: %v\t\n", len(cell.Obstacles), len(cell.KeepOuts), len(cell.Marks), cell.Collector != nil)
+	count := func(n int, one, many string) string { return fmt.Sprintf("%d %s", n, plural(n, one, many)) }
+	fmt.Fprintf(tw, "  \t%s, %s, %s\t\n", count(len(cell.Obstacles), "obstacle", "obstacles"), count(len(cell.KeepOuts), "keep-out zone", "keep-out zones"), count(len(cell.Marks), "floor mark", "floor marks"))
+	if col := cell.Collector; col != nil {
+		fmt.Fprintf(tw, "  collector\tinlet Ø %s at X %s Y %s, %s downstream of the exit\t\n", L(col.Diameter), L(col.Inlet.X), L(col.Inlet.Y), L(req.Exit.ToJet(col.Inlet).X))
+	} else {
+		fmt.Fprintf(tw, "  collector\tnone\t\n")
+	}
 	n := req.Nozzle
 	e := req.Exit.Exit
 	fmt.Fprintf(tw, "  nozzle\t%s, D %s, exit at X %s Y %s, axis %s above the floor, heading %.1f°\t\n",
@@ -82,9 +87,9 @@ func summary(w io.Writer, req *planner.Request, warnings []layout.Warning) error
 		}
 		k := a.Count()
 		total += k
-		what := "stations"
+		what := plural(k, "station", "stations")
 		if a.Kind == planner.Probes {
-			what = "probe stands"
+			what = plural(k, "probe stand", "probe stands")
 		}
 		radius := ""
 		switch {
@@ -95,7 +100,7 @@ func summary(w io.Writer, req *planner.Request, warnings []layout.Warning) error
 		}
 		fmt.Fprintf(tw, "%s\t%s: %s, %d %s to place%s\t\n", label, a.Name, a.Kind, k, what, radius)
 	}
-	fmt.Fprintf(tw, "  in all\t%d stations\t\n", total)
+	fmt.Fprintf(tw, "  in all\t%d %s\t\n", total, plural(total, "station", "stations"))
 	if err := tw.Flush(); err != nil {
 		return err
 	}

@@ -22,6 +22,11 @@ import (
 var (
 	asBuiltColumns  = []string{"id", "x", "y", "z", "base_x", "base_y"}
 	asBuiltRequired = []string{"id", "x", "y", "z"}
+	// exportOnly are the other columns of the station CSV that
+	// 'arcwright plan --csv' writes: an edited copy of it is read as an
+	// as-built file, its x_m … base_y_m columns in metres, the rest ignored.
+	exportOnly = []string{"channel", "array", "kind", "height_m", "radius_m", "polar_deg", "polar_convention", "azimuth_deg",
+		"stand", "aim", "status", "governing_point", "velocity_clearance_m", "hot_clearance_m", "wall_clearance_m", "reasons"}
 )
 
 // LoadAsBuilt reads the station positions measured after set-up from the
@@ -91,9 +96,17 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 		}
 		return nil
 	}
-	col, ok := d.asBuiltHeader(header)
+	col, metres, ok := d.asBuiltHeader(header)
 	if !ok {
 		return nil
+	}
+	bare := d.lenUnit
+	length := func(n *yaml.Node, c string) (float64, bool) {
+		if d.lenUnit = bare; metres[c] {
+			d.lenUnit = "m"
+		}
+		defer func() { d.lenUnit = bare }()
+		return d.asBuiltLength(n, c)
 	}
 	ci := &cellInfo{cell: geometry.Cell{Ceiling: ceiling}, ceilingOK: !math.IsNaN(ceiling)}
 	out := map[string]planner.Placement{}
@@ -137,15 +150,15 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 		good := true
 		coords := []*float64{&p.Mic.X, &p.Mic.Y, &p.Mic.Z}
 		for i, c := range []string{"x", "y", "z"} {
-			v, ok := d.asBuiltLength(at(c), c)
+			v, ok := length(at(c), c)
 			if ok && c == "z" {
 				ok = d.heightRange(ci, v, line, "z", "the station")
 			}
 			*coords[i], good = v, good && ok
 		}
 		if bx, by := at("base_x"), at("base_y"); bx != nil && (bx.Value != "" || by.Value != "") {
-			x, okX := d.asBuiltLength(bx, "base_x")
-			y, okY := d.asBuiltLength(by, "base_y")
+			x, okX := length(bx, "base_x")
+			y, okY := length(by, "base_y")
 			p.Base, good = &orb.Point{x, y}, good && okX && okY
 		}
 		if good {
@@ -159,12 +172,16 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 }
 
 // asBuiltHeader maps the column names of the header row to their index.
-func (d *decoder) asBuiltHeader(header []string) (map[string]int, bool) {
-	col := map[string]int{}
-	ok := true
+func (d *decoder) asBuiltHeader(header []string) (col map[string]int, metres map[string]bool, ok bool) {
+	col, metres, ok = map[string]int{}, map[string]bool{}, true
 	for i, h := range header {
 		h = strings.ToLower(strings.TrimSpace(h))
+		if base, cut := strings.CutSuffix(h, "_m"); cut && contains(asBuiltColumns, base) {
+			h, metres[base] = base, true
+		}
 		switch {
+		case contains(exportOnly, h):
+			continue
 		case !contains(asBuiltColumns, h):
 			d.add(ErrUnknownKey, nil, 1, h, strings.Replace(unknownKeyMsg(h, "an as-built file", asBuiltColumns), "unknown key", "unknown column", 1))
 			ok = false
@@ -185,7 +202,7 @@ func (d *decoder) asBuiltHeader(header []string) (map[string]int, bool) {
 		d.errorf(ErrMissing, 1, "base_y", "give both base_x and base_y, or neither")
 		ok = false
 	}
-	return col, ok
+	return col, metres, ok
 }
 
 // has reports whether the header has column c.

@@ -78,6 +78,9 @@ type Station struct {
 	Channel int // data-system channel; 0 for probe stands
 	// Mic is the microphone (or probe tip) in the cell frame, m.
 	Mic r3.Vec
+	// Planned is where the plan puts the microphone when Mic is an
+	// as-built position (Request.AsBuilt); nil otherwise.
+	Planned *r3.Vec
 	// Base is the plan position of the stand pole, m (equal to the
 	// microphone's plan position when the stand has no boom).
 	Base orb.Point

@@ -18,6 +18,17 @@ import (
 // plan.
 var ErrRequest = errors.New("planner: bad request")
 
+// ErrAsBuilt is wrapped by the error about as-built positions that name
+// no station of the plan.
+var ErrAsBuilt = errors.New("as-built positions")
+
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
+}
+
 // New places every station of req, checks each against every operating
 // point and returns the plan. req is not modified.
 func New(req *Request) (*Plan, error) {
@@ -165,6 +176,8 @@ func New(req *Request) (*Plan, error) {
 				boom = pa.stand.BoomLength
 			}
 			if ab, ok := req.AsBuilt[st.ID]; ok {
+				planned := s.mic
+				st.Planned = &planned
 				s.mic, st.Mic = ab.Mic, ab.Mic
 				if pa.stand == nil {
 					s.mic.Z, st.Mic.Z = 0, 0
@@ -198,7 +211,11 @@ func New(req *Request) (*Plan, error) {
 	}
 	if len(unknown) > 0 {
 		sort.Strings(unknown)
-		return nil, fmt.Errorf("%w: as-built positions for stations the layout does not have: %s", ErrRequest, strings.Join(unknown, ", "))
+		like := "it has none"
+		if len(plan.Stations) > 0 {
+			like = "its stations are named like " + plan.Stations[0].ID
+		}
+		return nil, fmt.Errorf("%w: %s %s not in the plan (%s)", ErrAsBuilt, plural(len(unknown), "station", "stations"), strings.Join(unknown, ", "), like)
 	}
 
 	// stand footprints and sight-line solids
