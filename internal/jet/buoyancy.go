@@ -28,10 +28,15 @@ type Buoyancy struct {
 	Onset float64
 }
 
-// buoyancyOf returns the buoyancy of a jet of density ratio ρj/ρa = dr,
-// velocity uj (m/s) and fully expanded area area (m²).
-func buoyancyOf(dr, uj, area float64) Buoyancy {
-	gp := Gravity * (1 - dr)
+// buoyancyOf returns the buoyancy of a jet of velocity uj (m/s) and fully
+// expanded area area (m²): dr is the density ratio ρj/ρa of the fully
+// expanded jet, which sets its momentum flux, and br the density ratio that
+// sets its buoyancy, that of the jet gas at its total temperature against
+// the ambient (as the jet slows, its kinetic energy returns as heat, so an
+// unheated jet with T0 = Ta carries no buoyancy however cold its static
+// temperature).
+func buoyancyOf(dr, br, uj, area float64) Buoyancy {
+	gp := Gravity * (1 - br)
 	b := Buoyancy{ReducedGravity: gp, MomentumLength: math.Inf(1), Onset: math.Inf(1)}
 	if gp == 0 || uj <= 0 {
 		return b

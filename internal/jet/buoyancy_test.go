@@ -21,7 +21,7 @@ func TestBuoyancy(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			b := buoyancyOf(288.15/tt.tj, tt.uj, math.Pi*tt.d*tt.d/4)
+			b := buoyancyOf(288.15/tt.tj, 288.15/tt.tj, tt.uj, math.Pi*tt.d*tt.d/4)
 			if !near(b.MomentumLength, tt.lm, 3e-3) {
 				t.Errorf("L_M: got %.3f m, want %.3g", b.MomentumLength, tt.lm)
 			}
@@ -39,10 +39,10 @@ func TestBuoyancy(t *testing.T) {
 			}
 		})
 	}
-	if b := buoyancyOf(1, 300, 1); !math.IsInf(b.MomentumLength, 1) || b.Rise(100) != 0 {
+	if b := buoyancyOf(1, 1, 300, 1); !math.IsInf(b.MomentumLength, 1) || b.Rise(100) != 0 {
 		t.Errorf("neutral jet: got %+v", b)
 	}
-	if b := buoyancyOf(1.2, 300, 1); b.Rise(b.MomentumLength) >= 0 {
+	if b := buoyancyOf(1.2, 1.2, 300, 1); b.Rise(b.MomentumLength) >= 0 {
 		t.Errorf("dense jet should sink: rise %g", b.Rise(b.MomentumLength))
 	}
 }
@@ -85,5 +85,19 @@ func TestFlags(t *testing.T) {
 		if f.Kind == FlagShock || f.Kind == FlagBuoyant || f.Kind == FlagLaminar {
 			t.Errorf("plain subsonic model jet flagged %v", f)
 		}
+	}
+}
+
+// TestUnheatedJetIsNotBuoyant checks that a jet with T0 = Ta carries no
+// buoyancy although its static temperature is below ambient (its kinetic
+// energy returns as heat as it slows; derived from the conservation of
+// total enthalpy).
+func TestUnheatedJetIsNotBuoyant(t *testing.T) {
+	p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: 0.3}, cold(1.69), DefaultLimits())
+	if err != nil {
+		t.Fatal(err)
+	}
+	if b := p.Buoyancy(); b.ReducedGravity != 0 || !math.IsInf(b.MomentumLength, 1) || Has(p.Flags(), FlagBuoyant) {
+		t.Errorf("unheated jet: got %+v, flags %v", b, p.Flags())
 	}
 }

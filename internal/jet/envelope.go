@@ -37,8 +37,25 @@ func (v Variant) String() string {
 	return "nominal"
 }
 
+// The points inside a sampling interval where an outline's chord gap is
+// measured.
+var (
+	midOnly  = []float64{0.5}
+	quarters = []float64{0.25, 0.5, 0.75}
+)
+
 // envelopeSamples is the number of axial intervals of an envelope outline.
 const envelopeSamples = 96
+
+// cosineSpacing holds the sampling positions of an outline as fractions of
+// its length, (1 − cos(π·i/n))/2.
+var cosineSpacing = func() [envelopeSamples + 1]float64 {
+	var s [envelopeSamples + 1]float64
+	for i := range s {
+		s[i] = (1 - math.Cos(math.Pi*float64(i)/envelopeSamples)) / 2
+	}
+	return s
+}()
 
 // Envelope is a closed zone of the jet: the body of revolution about the jet
 // axis whose meridian is r ≤ Radius(x) for 0 ≤ x ≤ Length.
@@ -91,10 +108,34 @@ func (e *Envelope) Clearance(x, r float64) float64 {
 	}
 	r = math.Abs(r)
 	d := e.outlineDistance(x, r)
-	if e.Contains(x, r) {
+	// a point inside the zone, or inside the outline where a chord bulges
+	// out of the exact zone, is given no positive clearance
+	if e.Contains(x, r) || e.insideOutline(x, r) {
 		return -d - e.Tolerance
 	}
 	return d - e.Tolerance
+}
+
+// insideOutline reports whether (x, r) lies inside the outline polygon: r
+// at most the outline's radius, linearly interpolated, at x.
+func (e *Envelope) insideOutline(x, r float64) bool {
+	p := e.Points
+	if x < 0 || x > e.Length || len(p) < 3 {
+		return false
+	}
+	// p[1:] runs from the exit lip to the tip with x non-decreasing
+	i := sort.Search(len(p)-1, func(i int) bool { return p[i+1][0] >= x }) + 1
+	if i >= len(p) {
+		return false
+	}
+	if i == 1 {
+		return r <= p[1][1]
+	}
+	a, b := p[i-1], p[i]
+	if b[0] == a[0] {
+		return r <= max(a[1], b[1])
+	}
+	return r <= a[1]+(b[1]-a[1])*(x-a[0])/(b[0]-a[0])
 }
 
 // outlineDistance returns the distance from (x, r) to the outline polyline,
@@ -143,29 +184,34 @@ func segmentDistanceSquared(x, r float64, a, b [2]float64) float64 {
 // newEnvelope samples radius on [0, length] into an outline. kinks are axial
 // positions where the radius has a corner; they become vertices.
 func newEnvelope(z Zone, v Variant, limit, length float64, radius func(float64) float64, kinks ...float64) Envelope {
-	return newEnvelopePeak(z, v, limit, length, radius, nil, kinks...)
+	return newEnvelopePeak(z, v, limit, length, radius, nil, nil, kinks...)
 }
 
 // newEnvelopePeak is newEnvelope for a radius whose widest point is known
-// (x, r): the search for it is skipped.
-func newEnvelopePeak(z Zone, v Variant, limit, length float64, radius func(float64) float64, peak *[2]float64, kinks ...float64) Envelope {
+// (x, r): the search for it is skipped. Where smooth(x) is false at either
+// end of an interval, the radius may have corners at unknown places there,
+// and the chord's gap is measured at three points instead of one; a nil
+// smooth means smooth everywhere.
+func newEnvelopePeak(z Zone, v Variant, limit, length float64, radius func(float64) float64, peak *[2]float64, smooth func(float64) bool, kinks ...float64) Envelope {
 	e := Envelope{Zone: z, Variant: v, Limit: limit, radius: radius}
 	if !(length > 0) || math.IsInf(length, 0) {
 		return e
 	}
 	e.Length = length
 	xs := make([]float64, 0, envelopeSamples+1+len(kinks))
-	for i := 0; i <= envelopeSamples; i++ {
+	for _, s := range cosineSpacing {
 		// cosine spacing: dense at the exit and at the tip, where the
 		// radius changes fastest
-		xs = append(xs, length*(1-math.Cos(math.Pi*float64(i)/envelopeSamples))/2)
+		xs = append(xs, length*s)
 	}
 	for _, k := range kinks {
 		if k > 0 && k < length {
-			xs = append(xs, k)
+			i := sort.SearchFloat64s(xs, k)
+			xs = append(xs, 0)
+			copy(xs[i+1:], xs[i:])
+			xs[i] = k
 		}
 	}
-	sort.Float64s(xs)
 	e.Points = make([][2]float64, 0, len(xs)+1)
 	e.Points = append(e.Points, [2]float64{0, 0})
 	prevX, prevR := -1.0, 0.0
@@ -185,12 +231,20 @@ func newEnvelopePeak(z Zone, v Variant, limit, length float64, radius func(float
 			// the chord may cut inside a convex stretch of the zone: the
 			// gap at the midpoint, times 1.25, bounds it both where the
 			// edge is near-parabolic (max at the midpoint) and at the tip,
-			// where r ∝ sqrt(L − x) (max 1.21 × the midpoint gap) (derived)
-			xm := (prevX + x) / 2
-			rm := radius(xm)
-			e.Tolerance = math.Max(e.Tolerance, 1.25*(rm-(prevR+r)/2))
-			if rm > e.MaxRadius {
-				e.MaxRadius, e.MaxRadiusAt = rm, xm
+			// where r ∝ sqrt(L − x) (max 1.21 × the midpoint gap)
+			// (derived); a corner inside the interval needs the finer
+			// measure of three points
+			ts := midOnly
+			if smooth != nil && (!smooth(prevX) || !smooth(x)) {
+				ts = quarters
+			}
+			for _, t := range ts {
+				xm := prevX + t*(x-prevX)
+				rm := radius(xm)
+				e.Tolerance = math.Max(e.Tolerance, 1.25*(rm-(prevR+t*(r-prevR))))
+				if rm > e.MaxRadius {
+					e.MaxRadius, e.MaxRadiusAt = rm, xm
+				}
 			}
 		}
 		prevX, prevR = x, r

@@ -72,7 +72,7 @@ func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
 	}
 	f.x0u = math.Max(f.x0, f.lc-m.B*f.de)
 	f.x0t = math.Max(f.x0, f.lc-m.KT*f.de)
-	if n.Kind == Rectangular && n.AspectRatio() >= planeAspectMin {
+	if m.PlaneLaw && n.Kind == Rectangular && n.AspectRatio() >= planeAspectMin {
 		f.plane = true
 		de := e.Diameter
 		f.planeB = n.Height * (f.dj * f.dj / (de * de)) * e.DensityRatio
@@ -80,6 +80,17 @@ func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
 		f.planeLaminar = f.reH < laminarPlaneRe
 	}
 	return f
+}
+
+// kinks returns the axial positions where the field's laws change and its
+// contours may have a corner: the end of the core, the ends of the caps at
+// Uj and at the exit temperature, and where the far-field width takes over.
+func (f *field) kinks() []float64 {
+	k := []float64{f.lc, f.x0u + f.m.B*f.de, f.x0t + f.m.KT*f.de}
+	if f.m.S > 0 {
+		k = append(k, f.x0+f.wc/f.m.S)
+	}
+	return k
 }
 
 // uc returns the centreline velocity at x, m/s.

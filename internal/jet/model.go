@@ -37,6 +37,12 @@ type Model struct {
 	// PlaneS and PlaneK are the plane-jet spreading rate dy½/dx and decay
 	// constant Uc/U0 = PlaneK·sqrt(b/(x − x0)).
 	PlaneS, PlaneK float64
+	// PlaneLaw, when true, lets a high-aspect-ratio slot decay by the
+	// plane-jet law near the exit (the slower of it and the round law's
+	// centreline velocity is not taken: the faster decay is). The
+	// conservative model keeps the round law, which bounds the slot's
+	// measured decay from above.
+	PlaneLaw bool
 }
 
 // NominalModel returns central values of the published constants.
@@ -65,8 +71,9 @@ func NominalModel() Model {
 		Tail:   1,
 		// S_p = 0.10–0.11 (Gutmark & Wygnanski 1976); K_u = 2.46 from the
 		// Gaussian momentum identity for S_p = 0.11 (derived).
-		PlaneS: 0.11,
-		PlaneK: 2.46,
+		PlaneS:   0.11,
+		PlaneK:   2.46,
+		PlaneLaw: true,
 	}
 }
 

@@ -73,7 +73,8 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 		k := math.Max(1, e.FullyExpandedDiameter/e.Diameter)
 		p.lipW, p.lipH = k*n.Width/2, k*n.Height/2
 	}
-	p.buoy = buoyancyOf(e.DensityRatio, e.Velocity, math.Pi*e.FullyExpandedDiameter*e.FullyExpandedDiameter/4)
+	br := RAir * c.Ambient.Temperature / (e.Gas.R * e.TotalTemperature)
+	p.buoy = buoyancyOf(e.DensityRatio, br, e.Velocity, math.Pi*e.FullyExpandedDiameter*e.FullyExpandedDiameter/4)
 	p.buildEnvelopes()
 	p.flags = p.regimeFlags()
 	return p, nil
@@ -182,8 +183,24 @@ func (p *Plume) buildEnvelopes() {
 	domU := func(x float64) bool {
 		return same && p.cons.uc(x) >= p.nom.uc(x) && p.cons.rc(x) >= p.nom.rc(x) && p.cons.m.Tail*p.cons.w(x) >= p.nom.w(x)
 	}
-	p.env[0][0] = newEnvelope(VelocityZone, Nominal, uLim, nomTipU, nomU, p.nom.lc)
-	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), nomU, consU, domU, slopeU)
+	// the larger of both contours in one pass over the fields' laws
+	farU := func(x float64) float64 {
+		c, n := &p.cons, &p.nom
+		if x < 0 {
+			return 0
+		}
+		cu, crc, cw := c.uc(x), c.rc(x), c.m.Tail*c.w(x)
+		r := 0.0
+		if cu > uLim {
+			r = crc + cw*c.su.inverse(uLim/cu)
+		}
+		if nu, nrc, nw := n.uc(x), n.rc(x), n.w(x); !(same && cu >= nu && crc >= nrc && cw >= nw) && nu > uLim {
+			r = max(r, nrc+nw*n.su.inverse(uLim/nu))
+		}
+		return r
+	}
+	p.env[0][0] = newEnvelope(VelocityZone, Nominal, uLim, nomTipU, nomU, p.nom.kinks()...)
+	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), farU, consU, domU, slopeU)
 
 	// hot zone, on the excess total temperature
 	tLim := lim.Temperature
@@ -203,8 +220,23 @@ func (p *Plume) buildEnvelopes() {
 		return sameT && p.cons.thetac(x) >= p.nom.thetac(x) && p.cons.rc(x) >= p.nom.rc(x) &&
 			p.cons.m.Tail*p.cons.lambda*p.cons.w(x) >= p.nom.lambda*p.nom.w(x)
 	}
-	p.env[1][0] = newEnvelope(HotZone, Nominal, tLim, nomTipT, nomT, p.nom.lc)
-	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), nomT, consT, domT, slopeT)
+	farT := func(x float64) float64 {
+		c, n := &p.cons, &p.nom
+		if x < 0 {
+			return 0
+		}
+		ct, crc, cw := c.thetac(x), c.rc(x), c.m.Tail*c.lambda*c.w(x)
+		r := 0.0
+		if ct > eps {
+			r = crc + cw*c.st.inverse(eps/ct)
+		}
+		if nt, nrc, nw := n.thetac(x), n.rc(x), n.lambda*n.w(x); !(sameT && ct >= nt && crc >= nrc && cw >= nw) && nt > eps {
+			r = max(r, nrc+nw*n.st.inverse(eps/nt))
+		}
+		return r
+	}
+	p.env[1][0] = newEnvelope(HotZone, Nominal, tLim, nomTipT, nomT, p.nom.kinks()...)
+	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), farT, consT, domT, slopeT)
 }
 
 // conservative builds a conservative envelope: the largest of the nominal
@@ -214,27 +246,34 @@ func (p *Plume) buildEnvelopes() {
 // whichever comes first, and never wider than that widest point (a zone
 // that ends before the developed field outgrows the lip edge would
 // otherwise end in a cliff at the lip edge's width).
-func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, nom, cons func(float64) float64, dominates func(float64) bool, slope float64) Envelope {
+//
+// far is the larger of the nominal and conservative contours, cons the
+// conservative one alone, and dominates tells where the conservative field
+// contains the nominal one (elsewhere the two contours may cross, making
+// corners at unknown places).
+func (p *Plume) conservative(z Zone, limit, nomTip, consTip float64, far, cons func(float64) float64, dominates func(float64) bool, slope float64) Envelope {
 	length := math.Max(nomTip, consTip)
-	far := func(x float64) float64 {
-		if dominates(x) {
-			return cons(x)
-		}
-		return max(nom(x), cons(x))
-	}
 	xPeak, rPeak := widest(far, length)
 	near := func(x float64) float64 { return p.nearEdge(x, slope) }
 	end := math.Min(catchUp(near, cons, consTip), xPeak)
+	// never narrower than the exit section itself
+	capR := math.Max(rPeak, near(0))
 	radius := func(x float64) float64 {
 		r := far(x)
 		if x <= end {
-			r = max(r, min(near(x), rPeak))
+			r = max(r, min(near(x), capR))
 		}
 		return r
 	}
-	// the lip edge is never wider than the contour's widest point, so
-	// that point is the zone's widest
-	return newEnvelopePeak(z, Conservative, limit, length, radius, &[2]float64{xPeak, rPeak}, p.cons.lc, p.nom.lc, end)
+	// corners of the radius become vertices of the outline: the laws'
+	// changes in both fields, the end of the lip edge and where it meets
+	// its cap
+	kinks := append(p.cons.kinks(), p.nom.kinks()...)
+	kinks = append(kinks, end, monotoneRoot(func(x float64) float64 { return capR - near(x) }, p.lipW))
+	// where the nominal contour may cross the conservative one, their max
+	// has corners at unknown places: the chords are measured more finely
+	// there
+	return newEnvelopePeak(z, Conservative, limit, length, radius, &[2]float64{xPeak, math.Max(rPeak, radius(0))}, dominates, kinks...)
 }
 
 // widest returns where on [0, length] f is largest, and its value: a scan
@@ -296,7 +335,7 @@ func catchUp(near, far func(float64) float64, end float64) float64 {
 			return 0
 		}
 		lo, hi := prev, x
-		for k := 0; k < 60 && hi-lo > 1e-10*hi; k++ {
+		for k := 0; k < 60 && hi-lo > 1e-7*hi; k++ {
 			mid := (lo + hi) / 2
 			if near(mid) > far(mid) {
 				lo = mid

@@ -374,3 +374,50 @@ func TestNoCliffAtTheTip(t *testing.T) {
 		}
 	}
 }
+
+// TestSlotExitInsideZone checks that a rectangular slot's exit section is
+// inside its zones: a short hot zone once capped the lip edge below the
+// slot's half-diagonal (found in review).
+func TestSlotExitInsideZone(t *testing.T) {
+	for _, ar := range []float64{4, 10, 30} {
+		n := RectangularFromAspect(0.1, ar, 0)
+		c := Condition{Primary: Stream{NPR: 1.05, TotalTemperature: 340}, Ambient: StandardAmbient()}
+		p, err := NewPlume(n, c, DefaultLimits())
+		if err != nil {
+			t.Fatal(err)
+		}
+		half := math.Hypot(n.Width/2, n.Height/2)
+		for _, z := range []Zone{VelocityZone, HotZone} {
+			e := p.Envelope(z, Conservative)
+			if e.Length == 0 {
+				continue
+			}
+			if got := e.Clearance(0.001*n.Width, half); got > 0 {
+				t.Errorf("AR %g %v: corner of the exit has clearance %.4g m, want ≤ 0", ar, z, got)
+			}
+		}
+	}
+}
+
+// TestClearanceNeverPositiveInsideOutline checks that a point inside the
+// outline polygon, even where a chord bulges out of the exact zone, is
+// given no positive clearance, and that the outline's tolerance covers the
+// corner where the lip edge meets its cap (both found in review).
+func TestClearanceNeverPositiveInsideOutline(t *testing.T) {
+	n := RectangularFromAspect(0.1, 4, 0)
+	p, err := NewPlume(n, cold(3), Limits{Velocity: 1, Temperature: 323.15})
+	if err != nil {
+		t.Fatal(err)
+	}
+	e := p.Envelope(VelocityZone, Conservative)
+	for k := 0; k <= 20000; k++ {
+		x := e.Length * float64(k) / 20000
+		r := e.Radius(x)
+		if c := e.Clearance(x, r+1e-4); c > 1e-4 {
+			t.Fatalf("x %.4g: a point 0.1 mm outside the zone has clearance %.4g m (tolerance %.4g)", x, c, e.Tolerance)
+		}
+		if c := e.Clearance(x, 0.5*r); c > 0 {
+			t.Fatalf("x %.4g: a point inside has clearance %.4g m", x, c)
+		}
+	}
+}
