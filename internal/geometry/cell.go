@@ -141,3 +141,24 @@ func (c *Cell) Solids() []Solid {
 	}
 	return out
 }
+
+// SegmentInside reports whether the plan segment ab stays inside the
+// boundary, which counts as inside; true when the cell is unbounded. A
+// segment that only touches the boundary, or runs along it, is inside; one
+// that crosses an edge, or has an end outside, is not.
+func (c *Cell) SegmentInside(a, b orb.Point) bool {
+	if !c.Bounded() {
+		return true
+	}
+	if !c.Contains(a) || !c.Contains(b) {
+		return false
+	}
+	for i := 0; i+1 < len(c.Boundary); i++ {
+		if segmentsCross(a, b, c.Boundary[i], c.Boundary[i+1]) {
+			return false
+		}
+	}
+	// both ends inside and no edge crossed: the segment can still leave
+	// through a vertex of a reflex corner; its midpoint tells
+	return c.Contains(orb.Point{(a[0] + b[0]) / 2, (a[1] + b[1]) / 2})
+}

@@ -188,3 +188,29 @@ func TestSolidAndFrameValidate(t *testing.T) {
 		})
 	}
 }
+
+// TestSegmentInside checks sight lines against an L-shaped room
+// (hand-computed): a line across the reflex corner leaves the room, one
+// along an inner wall stays in, and an open site keeps everything inside.
+func TestSegmentInside(t *testing.T) {
+	l := &Cell{Boundary: orb.Ring{{0, 0}, {20, 0}, {20, 8}, {8, 8}, {8, 20}, {0, 20}, {0, 0}}}
+	tests := []struct {
+		name string
+		a, b orb.Point
+		want bool
+	}{
+		{"across the reflex corner", orb.Point{12, 4}, orb.Point{4, 16}, false},
+		{"inside the long arm", orb.Point{2, 2}, orb.Point{18, 6}, true},
+		{"along the inner wall", orb.Point{8, 10}, orb.Point{8, 18}, true},
+		{"grazing the reflex vertex", orb.Point{12, 4}, orb.Point{4, 12}, true},
+		{"end outside", orb.Point{2, 2}, orb.Point{25, 2}, false},
+	}
+	for _, tt := range tests {
+		if got := l.SegmentInside(tt.a, tt.b); got != tt.want {
+			t.Errorf("%s: got %v, want %v", tt.name, got, tt.want)
+		}
+	}
+	if !(&Cell{}).SegmentInside(orb.Point{0, 0}, orb.Point{1e4, 1e4}) {
+		t.Error("open site: got outside")
+	}
+}
