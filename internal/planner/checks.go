@@ -175,14 +175,15 @@ func (ck *checker) hardware(st *Station) (fixed []probe, boom []probe) {
 	fixed = append(fixed, probe{ptop.X, ptop.R, s.PoleDiameter / 2, "stand pole"})
 	base := at(math.Max(0, math.Min(zAxis, s.BaseHeight)))
 	fixed = append(fixed, probe{base.X, base.R, s.BaseRadius, "stand base"})
-	if s.BoomLength > 0 {
-		b := r3.Vec{X: st.Base[0], Y: st.Base[1], Z: top}
-		n := int(math.Ceil(s.BoomLength / boomStep))
-		n = max(2, min(n, 32))
-		h := s.BoomLength / float64(n)
-		for i := 1; i < n; i++ {
+	// the arm from the pole top to the microphone as placed (or as built),
+	// sampled end to end: every point of it is within h/2 of a sample
+	b := r3.Vec{X: st.Base[0], Y: st.Base[1], Z: top}
+	if arm := math.Hypot(st.Mic.X-b.X, st.Mic.Y-b.Y); arm > 1e-3 {
+		n := int(math.Ceil(arm / boomStep))
+		n = max(2, min(n, 64))
+		h := arm / float64(n)
+		for i := 0; i <= n; i++ {
 			p := f.ToJet(r3.Add(b, r3.Scale(float64(i)/float64(n), r3.Sub(st.Mic, b))))
-			// every point of the boom is within h/2 of a sample
 			boom = append(boom, probe{p.X, p.R, h/2 + s.PoleDiameter/2, "boom"})
 		}
 	}
@@ -204,15 +205,22 @@ func zoneClearance(e *jet.Envelope, fixed, boom []probe, best float64) (float64,
 		if lb := math.Hypot(dx, dr) - e.Tolerance - p.pen; lb >= math.Min(min, best) {
 			return
 		}
-		if c := e.Clearance(p.x, p.r) - p.pen; c < min {
+		c := e.Clearance(p.x, p.r) - p.pen
+		if c < min || math.IsNaN(c) {
 			min, part = c, p.part
 		}
 	}
 	for _, p := range fixed {
 		try(p)
+		if math.IsNaN(min) {
+			return min, p.part // not evaluable: never read as clear
+		}
 	}
 	for _, p := range boom {
 		try(p)
+		if math.IsNaN(min) {
+			return min, p.part
+		}
 	}
 	return min, part
 }
@@ -409,8 +417,16 @@ func (ck *checker) sight(st *Station, i int) Check {
 	by := map[string]bool{}
 	var names []string
 	var hits []int
+	cell := &ck.req.Cell
 	for _, s := range ck.sources {
 		hit := false
+		if !cell.SegmentInside(orb.Point{s.X, s.Y}, orb.Point{st.Mic.X, st.Mic.Y}) {
+			hit = true
+			if n := "the " + ck.boundaryName(); !by[n] {
+				by[n] = true
+				names = append(names, n)
+			}
+		}
 		hits = ck.obstacles.AppendSegmentHits(hits[:0], s, st.Mic)
 		for _, j := range hits {
 			hit = true
@@ -457,18 +473,23 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 	r := st.Radius
 	band := req.Band
 
+	// a near-field line is meant to be inside the acoustic near field: the
+	// far-field criteria do not apply to it
+	farField := st.Kind != NearField
 	wl := r / ck.lambdaLow
-	wcheck := Check{Name: CheckWavelength, Value: wl, Unit: "λ", Verdict: OK,
-		Reason: fmt.Sprintf("%.1f wavelengths from the source at %.0f Hz", wl, band.Low)}
-	if wl < minWavelengths {
-		wcheck.Verdict = Warn
-		wcheck.Reason = fmt.Sprintf("only %.2f wavelengths from the source at %.0f Hz; the acoustic far field needs about 2 (common practice)", wl, band.Low)
+	if farField {
+		wcheck := Check{Name: CheckWavelength, Value: wl, Unit: "λ", Verdict: OK,
+			Reason: fmt.Sprintf("%.1f wavelengths from the source at %.0f Hz", wl, band.Low)}
+		if wl < minWavelengths {
+			wcheck.Verdict = Warn
+			wcheck.Reason = fmt.Sprintf("only %.2f wavelengths from the source at %.0f Hz; the acoustic far field needs about 2 (common practice)", wl, band.Low)
+		}
+		t.add(wcheck)
 	}
-	t.add(wcheck)
 
 	ab := ck.alphaHigh * r
 	ac := Check{Name: CheckAbsorption, Value: ab, Unit: "dB", Verdict: OK,
-		Reason: fmt.Sprintf("%.2f dB of air absorption at %s over %s (ISO 9613-1)", ab, units.FormatFrequency(band.High), ck.m(r))}
+		Reason: fmt.Sprintf("%.2f dB of air absorption in the %s band over %s (ISO 9613-1)", ab, ck.bands[len(ck.bands)-1].Nominal, ck.m(r))}
 	if ab > lim.Absorption {
 		ac.Verdict = Warn
 		ac.Reason += fmt.Sprintf(", above the %.3g dB the layout allows: correct the spectra to lossless", lim.Absorption)
@@ -482,63 +503,65 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 		e := p.Exit
 		dj := e.FullyExpandedDiameter
 
-		ratio := r / dj
-		fc := Check{Name: CheckFarField, Value: ratio, Unit: "Dj", Verdict: OK, Point: p.Name}
-		if ratio < lim.FarFieldRatio {
-			fc.Verdict = Warn
-		}
-		t.offer(fc, func(c Check) (reason string) {
-			reason = fmt.Sprintf("R/Dj = %.0f for %s", ratio, p.Name)
-			if c.Verdict == Warn {
-				reason = fmt.Sprintf("R/Dj = %.1f for %s, below the %.0f the layout asks (common practice)", ratio, p.Name, lim.FarFieldRatio)
+		if farField {
+			ratio := r / dj
+			fc := Check{Name: CheckFarField, Value: ratio, Unit: "Dj", Verdict: OK, Point: p.Name}
+			if ratio < lim.FarFieldRatio {
+				fc.Verdict = Warn
 			}
-			return
-		})
-
-		needs := ck.fresnel[k]
-		need := 0.0
-		first, last := -1, -1
-		for b, n := range needs {
-			need = math.Max(need, n)
-			if n > r {
-				if first < 0 {
-					first = b
+			t.offer(fc, func(c Check) (reason string) {
+				reason = fmt.Sprintf("R/Dj = %.0f for %s", ratio, p.Name)
+				if c.Verdict == Warn {
+					reason = fmt.Sprintf("R/Dj = %.1f for %s, below the %.0f the layout asks (common practice)", ratio, p.Name, lim.FarFieldRatio)
 				}
-				last = b
-			}
-		}
-		fr := Check{Name: CheckFresnel, Value: r / need, Unit: "", Verdict: OK, Point: p.Name}
-		if first >= 0 {
-			fr.Verdict = Warn
-		}
-		t.offer(fr, func(c Check) (reason string) {
-			if first < 0 {
-				reason = fmt.Sprintf("R ≥ L²/λ across the band for %s (R is %.2f times the largest L²/λ)", p.Name, r/need)
 				return
-			}
-			span := ck.bands[first].Nominal
-			if last > first {
-				span = "bands " + span + " to " + ck.bands[last].Nominal
-			}
-			reason = fmt.Sprintf("the Fresnel condition R ≥ L²/λ fails at %s for %s: the source region (up to %s long there) is not compact seen from %s; it needs %s", span, p.Name, ck.m(sourceLength(ck.bands[first:last+1], dj, e.Velocity)), ck.m(r), ck.m(need))
-			return
-		})
+			})
 
-		xs := p.CoreNominal - centreX
-		q := geometry.JetPoint{X: mic.X - centreX, R: mic.R}
-		_, thTrue, lerr := acoustics.SourceOffset(q.Distance(), q.Polar(), xs)
-		sc := Check{Name: CheckSourceErr, Value: lerr, Unit: "dB", Verdict: OK, Point: p.Name}
-		if math.Abs(lerr) > sourceOffsetLimit {
-			sc.Verdict = Warn
-		}
-		t.offer(sc, func(c Check) (reason string) {
-			dth := (thTrue - q.Polar()) * 180 / math.Pi
-			reason = fmt.Sprintf("%+.2f dB, %+.1f° from a source at the end of the core of %s", lerr, dth, p.Name)
-			if c.Verdict == Warn {
-				reason = fmt.Sprintf("treating the source as at the array centre errs by %+.2f dB and %+.1f° for %s (source near the end of the core, %s downstream)", lerr, dth, p.Name, ck.m(p.CoreNominal))
+			needs := ck.fresnel[k]
+			need := 0.0
+			first, last := -1, -1
+			for b, n := range needs {
+				need = math.Max(need, n)
+				if n > r {
+					if first < 0 {
+						first = b
+					}
+					last = b
+				}
 			}
-			return
-		})
+			fr := Check{Name: CheckFresnel, Value: r / need, Unit: "", Verdict: OK, Point: p.Name}
+			if first >= 0 {
+				fr.Verdict = Warn
+			}
+			t.offer(fr, func(c Check) (reason string) {
+				if first < 0 {
+					reason = fmt.Sprintf("R ≥ L²/λ across the band for %s (R is %.2f times the largest L²/λ)", p.Name, r/need)
+					return
+				}
+				span := ck.bands[first].Nominal
+				if last > first {
+					span = "bands " + span + " to " + ck.bands[last].Nominal
+				}
+				reason = fmt.Sprintf("the Fresnel condition R ≥ L²/λ fails at %s for %s: the source region (up to %s long there) is not compact seen from %s; it needs %s", span, p.Name, ck.m(sourceLength(ck.bands[first:last+1], dj, e.Velocity)), ck.m(r), ck.m(need))
+				return
+			})
+
+			xs := p.CoreNominal - centreX
+			q := geometry.JetPoint{X: mic.X - centreX, R: mic.R}
+			_, thTrue, lerr := acoustics.SourceOffset(q.Distance(), q.Polar(), xs)
+			sc := Check{Name: CheckSourceErr, Value: lerr, Unit: "dB", Verdict: OK, Point: p.Name}
+			if math.Abs(lerr) > sourceOffsetLimit {
+				sc.Verdict = Warn
+			}
+			t.offer(sc, func(c Check) (reason string) {
+				dth := (thTrue - q.Polar()) * 180 / math.Pi
+				reason = fmt.Sprintf("%+.2f dB, %+.1f° from a source at the end of the core of %s", lerr, dth, p.Name)
+				if c.Verdict == Warn {
+					reason = fmt.Sprintf("treating the source as at the array centre errs by %+.2f dB and %+.1f° for %s (source near the end of the core, %s downstream)", lerr, dth, p.Name, ck.m(p.CoreNominal))
+				}
+				return
+			})
+		}
 
 		gc := Check{Name: CheckGround, Value: math.NaN(), Unit: "Hz", Verdict: OK, Point: p.Name}
 		switch {

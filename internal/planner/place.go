@@ -149,27 +149,53 @@ func (pl placer) spots(a *Array, r float64, edge nearLine) ([]spot, []string) {
 		}
 	case Points, Probes:
 		for _, fx := range a.Fixed {
-			out = append(out, spot{mic: fx.At, nominal: math.NaN(), name: fx.Name, channel: fx.Channel})
+			at := fx.At
+			if pl.stand == nil {
+				at.Z = 0 // no stand: a microphone flush on the floor
+			}
+			out = append(out, spot{mic: at, nominal: math.NaN(), name: fx.Name, channel: fx.Channel})
 		}
 	}
 	return out, notes
 }
 
-// standBase returns the plan position of the pole for a microphone at mic
-// in an array centred at centre: the boom points from the pole toward the
-// centre, so the pole stands on the far side of the microphone.
-func standBase(mic, centre r3.Vec, boom float64, f geometry.JetFrame) orb.Point {
+// seenFrom returns the point on the axis from which a station's radius and
+// polar angle are measured, and its acoustic distance: the arc centre for
+// arcs, the centre of a polar-stepped line, and the nozzle exit otherwise
+// (a ring's or a sideline's microphones hear the jet from the exit region,
+// not from the foot of their perpendicular on the axis).
+func seenFrom(req *Request, a *Array) r3.Vec {
+	switch {
+	case a.Kind == Arc, a.Kind == Line && a.Spacing == 0:
+		return req.Exit.ToCell(geometry.JetPoint{X: a.CenterX})
+	}
+	return req.Exit.Exit
+}
+
+// standBase returns the plan position of the pole for a microphone at mic:
+// the boom, of length boom (m), runs horizontally from the pole to the
+// microphone. For an arc in a horizontal plane the pole stands on the
+// radius from the arc centre, so that the boom points the microphone at the
+// source; otherwise it stands to the side of the microphone away from the
+// jet axis (an overhead or underneath microphone swings its pole to the side
+// the array's azimuth names), so that no pole is planted on the axis.
+func standBase(mic, centre r3.Vec, boom float64, f geometry.JetFrame, a *Array) orb.Point {
 	if boom <= 0 {
 		return orb.Point{mic.X, mic.Y}
 	}
-	dx, dy := mic.X-centre.X, mic.Y-centre.Y
+	var dx, dy float64
+	if a.Kind == Arc && (a.HasHeight || math.Abs(math.Sin(a.Azimuth)) < 0.5) {
+		dx, dy = mic.X-centre.X, mic.Y-centre.Y
+	} else {
+		// away from the axis, across it in plan
+		foot := f.ToCell(geometry.JetPoint{X: f.ToJet(mic).X})
+		dx, dy = mic.X-foot.X, mic.Y-foot.Y
+	}
 	l := math.Hypot(dx, dy)
-	if l < 1e-9 {
-		// directly above or below the centre: swing the pole to the side
-		// of the jet the microphone is on
-		az := f.ToJet(mic).Azimuth
-		s := side(az)
-		h := f.Heading + s*math.Pi/2
+	if l < 1e-6 {
+		// directly above or below the axis (or the arc centre): to the
+		// side of the jet the array's azimuth points to
+		h := f.Heading + side(a.Azimuth)*math.Pi/2
 		dx, dy, l = math.Cos(h), math.Sin(h), 1
 	}
 	return orb.Point{mic.X + boom*dx/l, mic.Y + boom*dy/l}

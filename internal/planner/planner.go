@@ -51,13 +51,17 @@ func New(req *Request) (*Plan, error) {
 	if err != nil {
 		return nil, fmt.Errorf("%w: band: %w", ErrRequest, err)
 	}
+	if len(bands) == 0 {
+		return nil, fmt.Errorf("%w: the band %g–%g Hz holds no 1/3-octave band centre", ErrRequest, req.Band.Low, req.Band.High)
+	}
 	ck := &checker{req: req, lim: lim, points: points, atm: atm, bands: bands}
 	ck.c = atm.SpeedOfSound()
 	ck.lambdaLow = acoustics.Wavelength(req.Band.Low, ck.c)
 	if req.Cell.Kind == geometry.Anechoic {
 		ck.quarter = acoustics.QuarterWave(req.Band.Low, ck.c)
 	}
-	ck.alphaHigh = atm.Absorption(req.Band.High)
+	// at the exact centre of the top band, as in the absorption table
+	ck.alphaHigh = atm.Absorption(bands[len(bands)-1].Centre)
 	ck.fresnel = make([][]float64, len(points))
 	for k := range points {
 		e := points[k].Exit
@@ -184,13 +188,13 @@ func New(req *Request) (*Plan, error) {
 				}
 				asBuilt[st.ID] = true
 			}
-			st.Base = standBase(s.mic, pa.centre, boom, req.Exit)
+			st.Base = standBase(s.mic, pa.centre, boom, req.Exit, a)
 			if ab, ok := req.AsBuilt[st.ID]; ok && ab.Base != nil {
 				st.Base = *ab.Base
 			}
 			st.Height = s.mic.Z
 			rel := req.Exit.ToJet(s.mic)
-			cx := req.Exit.ToJet(pa.centre).X
+			cx := req.Exit.ToJet(seenFrom(req, a)).X
 			q := geometry.JetPoint{X: rel.X - cx, R: rel.R}
 			st.Jet = rel
 			st.Radius = q.Distance()
@@ -245,7 +249,7 @@ func New(req *Request) (*Plan, error) {
 	si := 0
 	for ai := range placed {
 		pa := &placed[ai]
-		cx := req.Exit.ToJet(pa.centre).X
+		cx := req.Exit.ToJet(seenFrom(req, &pa.res.Spec)).X
 		for range pa.spots {
 			ck.evaluate(&plan.Stations[si], si, &pa.res.Spec, cx)
 			si++
@@ -327,7 +331,7 @@ func (ck *checker) roomRadius(pl placer, a *Array) float64 {
 		if !cell.Bounded() {
 			return true
 		}
-		b := standBase(m, centre, boom, ck.req.Exit)
+		b := standBase(m, centre, boom, ck.req.Exit, a)
 		return cell.WallDistance(b)-footR >= need && cell.WallDistance(orb.Point{m.X, m.Y}) >= need
 	}
 	best := math.Inf(1)

@@ -71,7 +71,7 @@ func (ck *checker) summarise(res *ArrayResult, plan *Plan) {
 	}
 	for tj := 0.0; tj <= math.Pi+1e-12; tj += polarScanStep {
 		st := Station{Mic: pl.arcPoint(&a, tj, a.Radius), Stand: stand}
-		st.Base = standBase(st.Mic, res.Centre, boom, ck.req.Exit)
+		st.Base = standBase(st.Mic, res.Centre, boom, ck.req.Exit, &a)
 		fixed, bm := ck.hardware(&st)
 		clear := true
 		for k := range ck.points {
@@ -245,13 +245,21 @@ func (ck *checker) impingement(p *PointResult) []string {
 		for _, hit := range []struct {
 			x    float64
 			what string
-		}{{wall, "the " + ck.boundaryName()}, {floor, "the floor"}, {ceiling, "the ceiling"}} {
+		}{{wall, "the " + ck.boundaryName()}, {floor, "the " + ck.floorName()}, {ceiling, "the ceiling"}} {
 			if !math.IsInf(hit.x, 1) {
 				out = append(out, fmt.Sprintf("%s: the %s reaches %s about %s downstream of the exit: the exhaust spreads along it there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of that surface", p.Name, z.name, hit.what, ck.m(hit.x)))
 			}
 		}
 	}
 	return out
+}
+
+// floorName names the cell's floor: the ground of an outdoor pad.
+func (ck *checker) floorName() string {
+	if ck.req.Cell.Kind == geometry.OutdoorPad {
+		return "ground"
+	}
+	return "floor"
 }
 
 // boundaryName names the cell's boundary.
