@@ -234,21 +234,44 @@ func planText(w io.Writer, p *planner.Plan) {
 		}
 	}
 
-	var attention []planner.Station
-	for _, s := range p.Stations {
-		if s.Status != planner.OK {
-			attention = append(attention, s)
-		}
+	// stations that are not ok, runs with the same leading problem together
+	type run struct {
+		first, last *planner.Station
+		n           int
 	}
-	if len(attention) > 0 {
-		fmt.Fprintln(w, "\nStations that are not ok (first reason; the sheet and exports list all)")
-		tw = newTable(w, 0)
-		for _, s := range attention {
-			more := ""
-			if len(s.Reasons) > 1 {
-				more = fmt.Sprintf(" (+%d more)", len(s.Reasons)-1)
+	var runs []run
+	key := func(s *planner.Station) string {
+		for _, c := range s.Checks {
+			if c.Verdict == s.Status {
+				return s.Status.String() + "/" + c.Name + "/" + s.Array
 			}
-			fmt.Fprintf(tw, "  %s\t%s\t%s%s\t\n", s.ID, s.Status, s.Reasons[0], more)
+		}
+		return ""
+	}
+	for i := range p.Stations {
+		s := &p.Stations[i]
+		if s.Status == planner.OK {
+			continue
+		}
+		if k := len(runs) - 1; k >= 0 && runs[k].last == &p.Stations[i-1] && key(runs[k].first) == key(s) {
+			runs[k].last, runs[k].n = s, runs[k].n+1
+			continue
+		}
+		runs = append(runs, run{first: s, last: s, n: 1})
+	}
+	if len(runs) > 0 {
+		fmt.Fprintln(w, "\nStations that are not ok (the leading reason of the first of each run; the sheet and exports list every reason)")
+		tw = newTable(w, 0)
+		for _, r := range runs {
+			ids := r.first.ID
+			if r.n > 1 {
+				ids += " to " + r.last.ID
+			}
+			more := ""
+			if k := len(r.first.Reasons) - 1; k > 0 {
+				more = fmt.Sprintf(" (+%d more)", k)
+			}
+			fmt.Fprintf(tw, "  %s\t%s\t%s%s\t\n", ids, r.first.Status, r.first.Reasons[0], more)
 		}
 		tw.Flush()
 	}

@@ -3,6 +3,7 @@ package layout
 import (
 	"math"
 
+	"github.com/paulmach/orb"
 	"go.yaml.in/yaml/v3"
 
 	"arcwright/internal/planner"
@@ -56,6 +57,15 @@ func (d *decoder) angleRange(s *section, key string, hi float64, hiText string) 
 		if step, okS = d.angle(n, r.field("step")); okS && step <= 0 {
 			d.errorf(ErrInvalid, n.Line, r.field("step"), "the step must be greater than 0 deg, got %s", units.FormatAngleDeg(step))
 			okS = false
+		}
+	}
+	if okF && okT && okS {
+		// the last station falls short of "to" when the span is not a
+		// whole number of steps
+		span := math.Abs(to - from)
+		if k := math.Floor(span/step + 1e-6); span-k*step > 1e-6*step {
+			last := from + math.Copysign(k*step, to-from)
+			d.warnf(r.line, r.field("to"), "the steps from %s by %s stop at %s, short of %s", units.FormatAngleDeg(from), units.FormatAngleDeg(step), units.FormatAngleDeg(last), units.FormatAngleDeg(to))
 		}
 	}
 	return from, to, step, okF && okT && okS
@@ -279,6 +289,10 @@ func (d *decoder) fixed(s *section, key string, a *planner.Array, ac *arrayConte
 			var okAt bool
 			if f.At, okAt = d.spacePoint(n, p.field("at"), p.keyLine("at")); okAt {
 				okAt = d.heightRange(ac.ci, f.At.Z, p.keyLine("at"), p.field("at"), "the "+what)
+			}
+			if c := &ac.ci.cell; okAt && ac.ci.boundaryOK && c.Bounded() && !c.Contains(orb.Point{f.At.X, f.At.Y}) {
+				d.errorf(ErrInvalid, p.keyLine("at"), p.field("at"), "the %s at X %s, Y %s is outside the cell's boundary", what, d.fmtLen(f.At.X), d.fmtLen(f.At.Y))
+				okAt = false
 			}
 			good = good && okAt
 		} else {
