@@ -19,9 +19,10 @@ func newInitCommand(stdout io.Writer) *cobra.Command {
 		Use:   "init [FILE]",
 		Short: "Write a commented starter layout",
 		Long: `Write a complete, commented starter layout to FILE (default layout.yaml): an
-imaginary anechoic chamber with a model jet, three operating points, an arc, a
-sideline and a probe stand. Every key is explained in its comment; edit it for
-your cell and test, then run 'arcwright validate FILE'.
+imaginary anechoic chamber with a model jet, two operating points, and one
+array of each kind (an arc with an automatic radius, a sideline, a near-field
+line, a ring, single points and a probe stand). Every key is explained in its
+comment; edit it for your cell and test, then run 'arcwright validate FILE'.
 
 An existing file is not overwritten unless --force is given.
 

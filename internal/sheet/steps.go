@@ -104,10 +104,10 @@ func (b *builder) arcSteps(ar *planner.ArrayResult, ss []*planner.Station, say f
 			pr.length(ar.Radius))
 	}
 	s0 := ss[0]
-	say("Mark %s first at polar %s: X %s, Y %s.", s0.ID, degSign(s0.Polar), pr.length(s0.Mic.X), pr.length(s0.Mic.Y))
+	say("Mark %s first at polar %s: X %s, Y %s.", s0.ID, degSign(setOut(s0)), pr.length(s0.Mic.X), pr.length(s0.Mic.Y))
 	chords := make([]float64, len(ss)-1)
 	for i := range chords {
-		chords[i] = 2 * ar.Radius * math.Sin(math.Abs(ss[i+1].Polar-ss[i].Polar)/2)
+		chords[i] = 2 * ar.Radius * math.Sin(math.Abs(setOut(ss[i+1])-setOut(ss[i]))/2)
 	}
 	if len(chords) > 0 {
 		say("Then mark each station by its chord (2R·sin(half the angle step)) from the one before: %s.", strings.Join(runs(ss, chords, pr), "; "))
@@ -273,4 +273,15 @@ func idRange(ss []*planner.Station) string {
 		return ss[0].ID + " to " + ss[len(ss)-1].ID
 	}
 	return ss[0].ID + " and " + ss[1].ID
+}
+
+// setOut returns the polar angle a station is set out at on the floor: the
+// arc's requested angle where there is one (a microphone on the floor below
+// the axis sees the source at a slightly different angle, which the station
+// table gives), else the angle seen from the array's centre.
+func setOut(s *planner.Station) float64 {
+	if !math.IsNaN(s.Nominal) {
+		return s.Nominal
+	}
+	return s.Polar
 }
