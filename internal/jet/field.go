@@ -103,6 +103,8 @@ func (f *field) uc(x float64) float64 {
 	case x <= f.lc:
 	case f.laminar:
 		u = f.uj * laminarRoundCore * f.re * f.dj / x
+	case f.m.Blend:
+		u = f.uj * blendDecay(x, f.lc, f.x0u, f.m.B*f.de)
 	case x-f.x0u > f.m.B*f.de:
 		// beyond x0 + B·D_eff; before it the law is capped at Uj
 		// (the virtual origin may lie downstream of a short hot core)
@@ -133,10 +135,34 @@ func (f *field) thetac(x float64) float64 {
 		// heat-flux conservation with the Schlichting profiles (derived):
 		// ΔTc/ΔT0 = (1 + 2·Pr)/32·Re·D/x
 		return math.Min(1, (1+2*prandtlAir)/32*f.re*f.dj/x)
-	case x <= f.lc, x-f.x0t <= f.m.KT*f.de:
+	case x <= f.lc:
+		return 1
+	case f.m.Blend:
+		return blendDecay(x, f.lc, f.x0t, f.m.KT*f.de)
+	case x-f.x0t <= f.m.KT*f.de:
 		return 1
 	}
 	return f.m.KT * f.de / (x - f.x0t)
+}
+
+// blendDecay returns a centreline value, as a fraction of the exit value,
+// past the end of the core at lc (m): the far law a/(x − x0) beyond
+// xj = x0 + 2a, where it gives 1/2, and before xj a cubic Hermite that
+// leaves 1 with zero slope at lc and meets the far law's value and slope
+// at xj. It is monotone (the Fritsch–Carlson condition holds while
+// x0 − lc ≤ 4a, i.e. while D_eff ≥ 0.17 Dj) and continuous with its slope.
+func blendDecay(x, lc, x0, a float64) float64 {
+	xj := x0 + 2*a
+	if x >= xj {
+		return a / (x - x0)
+	}
+	h := xj - lc
+	t := (x - lc) / h
+	m1 := -a / ((xj - x0) * (xj - x0)) * h // far-law slope at xj, per unit t
+	// Hermite basis with p0 = 1, m0 = 0, p1 = 1/2, m1
+	t2, t3 := t*t, t*t*t
+	v := (2*t3-3*t2+1)*1 + (-2*t3+3*t2)*0.5 + (t3-t2)*m1
+	return min(1, v)
 }
 
 // rc returns the radius of the potential core, m.

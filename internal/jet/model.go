@@ -43,6 +43,14 @@ type Model struct {
 	// conservative model keeps the round law, which bounds the slot's
 	// measured decay from above.
 	PlaneLaw bool
+	// Blend, when true, joins the end of the core to the far-field laws
+	// with a smooth monotone cubic (centreline velocity from Uj with zero
+	// slope to the far law where it gives Uj/2, with the far law's slope;
+	// the excess temperature alike) instead of holding the exit value
+	// until the far law falls below it. The nominal model blends, so that
+	// its centreline starts to fall at the end of the potential core; the
+	// conservative one keeps the cap, which lies above the blend.
+	Blend bool
 }
 
 // NominalModel returns central values of the published constants.
@@ -74,6 +82,7 @@ func NominalModel() Model {
 		PlaneS:   0.11,
 		PlaneK:   2.46,
 		PlaneLaw: true,
+		Blend:    true,
 	}
 }
 

@@ -40,12 +40,27 @@ func TestFarFieldDecay(t *testing.T) {
 			t.Errorf("x %g D: got u(r½)/Uc %.6f, want 0.5", tt.x, got)
 		}
 	}
-	// capped at Uj between the end of the core and x0 + B·D (reference sheet §4)
-	if got := p.CenterlineVelocity(9.8); !near(got, 300, 1e-9) {
-		t.Errorf("x 9.8 D: got %.4f, want 300 (cap)", got)
+	// the conservative field holds Uj between the end of the core and
+	// x0 + B·D (reference sheet §4, "cap Uc at Uj"), then follows the law
+	if got := p.cons.uc(9.8); !near(got, 300, 1e-9) {
+		t.Errorf("conservative, x 9.8 D: got %.4f, want 300 (cap)", got)
 	}
-	if got := p.CenterlineVelocity(10); !near(got, 290, 1e-9) {
-		t.Errorf("x 10 D: got %.4f, want 290", got)
+	// the nominal one starts to fall at the end of the potential core,
+	// smoothly and monotonically, and meets the law where it gives Uj/2
+	lc := p.CoreLength(Nominal)
+	prev := 300.0
+	for x := lc; x < 20; x += 0.01 {
+		u := p.CenterlineVelocity(x)
+		if u > prev+1e-9 {
+			t.Fatalf("nominal centreline rises at x %g D", x)
+		}
+		prev = u
+	}
+	if got := p.CenterlineVelocity(lc + 1); got >= 300 || got < 250 {
+		t.Errorf("one diameter past the core: got %.2f m/s, want just below Uj", got)
+	}
+	if xj := p.nom.x0u + 2*5.8; !near(p.CenterlineVelocity(xj), 150, 1e-9) {
+		t.Errorf("at x0 + 2B·D: got %.4f, want Uj/2", p.CenterlineVelocity(xj))
 	}
 }
 
