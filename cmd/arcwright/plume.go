@@ -346,12 +346,13 @@ func plumeText(w io.Writer, p *jet.Plume, xs []float64, sys units.System) error 
 			fmt.Fprintf(tw, "  %s\t%s\tnone\t\t\t\n", z.name, z.limit)
 			continue
 		}
-		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t\n", z.name, z.limit, L(en.Length), L(en.MaxRadius), L(en.MaxRadiusAt))
+		A := func(m float64) string { return units.FormatLengthApprox(m, sys) }
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\t%s\t\n", z.name, z.limit, A(en.Length), A(en.MaxRadius), A(en.MaxRadiusAt))
 	}
 	tw.Flush()
 	fmt.Fprintln(w, "  Mean-flow zones: gusts exceed the mean. Keep people, stands and cables out of them during runs.")
 	if b := p.Buoyancy(); !math.IsInf(b.MomentumLength, 1) {
-		fmt.Fprintf(w, "\nBuoyancy: momentum length %s; momentum-dominated to about %s (Chen & Rodi 1980)\n", L(b.MomentumLength), L(b.Onset))
+		fmt.Fprintf(w, "\nBuoyancy: momentum length %s; momentum-dominated to about %s (Chen & Rodi 1980)\n", units.FormatLengthApprox(b.MomentumLength, sys), units.FormatLengthApprox(b.Onset, sys))
 	}
 	if fl := p.Flags(); len(fl) > 0 {
 		fmt.Fprintln(w, "\nWarnings")
