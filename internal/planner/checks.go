@@ -282,6 +282,23 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	}
 	micPlan := orb.Point{st.Mic.X, st.Mic.Y}
 	wall := math.Min(pc.Wall, cell.WallDistance(micPlan))
+	// the arm from the pole top to the microphone, sampled: every point of
+	// it is within h/2 of a sample (and the tube has the pole's radius)
+	var arm []r3.Vec
+	armPen := 0.0
+	if st.Stand != nil {
+		top := r3.Vec{X: st.Base[0], Y: st.Base[1], Z: st.Mic.Z}
+		if l := math.Hypot(st.Mic.X-top.X, st.Mic.Y-top.Y); l > 1e-3 {
+			n := max(2, min(int(math.Ceil(l/boomStep)), 64))
+			armPen = l/float64(n)/2 + st.Stand.PoleDiameter/2
+			for i := 0; i <= n; i++ {
+				arm = append(arm, r3.Add(top, r3.Scale(float64(i)/float64(n), r3.Sub(st.Mic, top))))
+			}
+		}
+	}
+	for _, q := range arm {
+		wall = math.Min(wall, cell.WallDistance(orb.Point{q.X, q.Y})-armPen)
+	}
 	wc := Check{Name: CheckWall, Value: wall, Unit: "m", Verdict: OK}
 	switch {
 	case math.IsInf(wall, 1):
@@ -302,8 +319,14 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 
 	obst, oname := pc.Obstacle, pc.ObstacleName
 	for _, o := range cell.Obstacles {
-		if d := o.Solid().Distance(st.Mic); d < obst {
+		sd := o.Solid()
+		if d := sd.Distance(st.Mic); d < obst {
 			obst, oname = d, o.Name
+		}
+		for _, q := range arm {
+			if d := sd.Distance(q) - armPen; d < obst {
+				obst, oname = d, o.Name
+			}
 		}
 	}
 	oc := Check{Name: CheckObstacle, Value: obst, Unit: "m", Verdict: OK}

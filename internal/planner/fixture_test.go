@@ -54,3 +54,9 @@ func chamber() *Request {
 		},
 	}
 }
+
+// geometryColumn returns a round obstacle of radius r (m) at c occupying
+// heights zmin to zmax (m).
+func geometryColumn(c orb.Point, r, zmin, zmax float64) geometry.Obstacle {
+	return geometry.Obstacle{Name: "column", Footprint: geometry.Circle(c, r), ZMin: zmin, ZMax: zmax}
+}

@@ -79,3 +79,22 @@ func TestPointsWithoutStandOnTheFloor(t *testing.T) {
 		t.Errorf("as built at %g m, want on the floor", s.Mic.Z)
 	}
 }
+
+// TestBoomAgainstObstacles checks that a boom reaching over an obstacle at
+// its height is caught, though its pole and microphone are clear of it.
+func TestBoomAgainstObstacles(t *testing.T) {
+	req := point(r3.Vec{X: 3, Y: 8, Z: 1.5})
+	req.Arrays[0].Stand = "boom"
+	req.Stands[1].BoomLength = 1.0
+	// the pole stands 1 m further from the exit at (5, 5) than the
+	// microphone; a column 0.5 m across between them at boom height
+	mic := r3.Vec{X: 3, Y: 8, Z: 1.5}
+	p := mustPlan(t, req)
+	b := p.Stations[0].Base
+	mid := orb.Point{(mic.X + b[0]) / 2, (mic.Y + b[1]) / 2}
+	req.Cell.Obstacles = append(req.Cell.Obstacles, geometryColumn(mid, 0.05, 1.4, 1.6))
+	p = mustPlan(t, req)
+	if c, _ := p.Stations[0].Check(CheckObstacle); c.Verdict != Blocked {
+		t.Errorf("boom through a column: got %v, %s", c.Verdict, c.Reason)
+	}
+}
