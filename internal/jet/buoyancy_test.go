@@ -2,6 +2,7 @@ package jet
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -73,7 +74,7 @@ func TestFlags(t *testing.T) {
 				t.Fatal(err)
 			}
 			for _, f := range p.Flags() {
-				if f.Kind == tt.want && contains(f.Reason, tt.text) {
+				if f.Kind == tt.want && strings.Contains(f.Reason, tt.text) {
 					return
 				}
 			}

@@ -3,6 +3,7 @@ package jet
 import (
 	"math"
 	"math/rand/v2"
+	"strings"
 	"testing"
 )
 
@@ -342,20 +343,11 @@ func TestPlumeErrors(t *testing.T) {
 	} {
 		t.Run(tt.name, func(t *testing.T) {
 			_, err := NewPlume(n, cold(1.5), tt.lim)
-			if err == nil || !contains(err.Error(), tt.want) {
+			if err == nil || !strings.Contains(err.Error(), tt.want) {
 				t.Errorf("got %v, want it to contain %q", err, tt.want)
 			}
 		})
 	}
-}
-
-func contains(s, sub string) bool {
-	for i := 0; i+len(sub) <= len(s); i++ {
-		if s[i:i+len(sub)] == sub {
-			return true
-		}
-	}
-	return false
 }
 
 // TestNoCliffAtTheTip checks that a conservative zone closes toward its
