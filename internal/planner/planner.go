@@ -31,6 +31,12 @@ func plural(n int, one, many string) string {
 
 // New places every station of req, checks each against every operating
 // point and returns the plan. req is not modified.
+//
+// It runs in phases, each a function below: predict the operating points,
+// prepare the checks (newChecker), place the arrays (placeArrays), name the
+// stations and apply the as-built positions (makeStations), index the
+// solids (indexSolids), check the stations (checkStations) and summarise
+// (summarisePlan).
 func New(req *Request) (*Plan, error) {
 	if err := validate(req); err != nil {
 		return nil, err
@@ -42,7 +48,27 @@ func New(req *Request) (*Plan, error) {
 	}
 	plan := &Plan{Request: req, Points: points}
 	plan.Governing, plan.GoverningHot = governing(points)
+	ck, err := newChecker(req, lim, points, plan.Governing)
+	if err != nil {
+		return nil, err
+	}
+	placed, err := ck.placeArrays()
+	if err != nil {
+		return nil, err
+	}
+	if err := ck.makeStations(plan, placed); err != nil {
+		return nil, err
+	}
+	ck.indexSolids(plan.Stations)
+	ck.checkStations(plan, placed)
+	ck.summarisePlan(plan, placed)
+	return plan, nil
+}
 
+// newChecker prepares what every check needs: the atmosphere, the bands,
+// the acoustic constants, the order of the points (governing first) and the
+// source samples for sight lines.
+func newChecker(req *Request, lim Limits, points []PointResult, gov int) (*checker, error) {
 	atm := acoustics.Atmosphere{Temperature: req.Ambient.Temperature, RelativeHumidity: req.Ambient.Humidity, Pressure: req.Ambient.Pressure}
 	if err := atm.Validate(); err != nil {
 		return nil, fmt.Errorf("%w: ambient: %w", ErrRequest, err)
@@ -71,9 +97,9 @@ func New(req *Request) (*Plan, error) {
 			ck.fresnel[k][b] = acoustics.FresnelRadius(l, band.Centre, ck.c)
 		}
 	}
-	ck.order = append(ck.order, plan.Governing)
+	ck.order = append(ck.order, gov)
 	for i := range points {
-		if i != plan.Governing {
+		if i != gov {
 			ck.order = append(ck.order, i)
 		}
 	}
@@ -86,14 +112,22 @@ func New(req *Request) (*Plan, error) {
 	for _, q := range sourceAxis(req.Exit, src, sightSamples) {
 		ck.sources = append(ck.sources, req.Exit.ToCell(q))
 	}
+	return ck, nil
+}
 
-	// place every array
-	type placedArray struct {
-		res    ArrayResult
-		spots  []spot
-		stand  *Stand
-		centre r3.Vec
-	}
+// placedArray is one array after placement: its result so far, its spots,
+// its stand (nil for flush or free microphones) and its centre.
+type placedArray struct {
+	res    ArrayResult
+	spots  []spot
+	stand  *Stand
+	centre r3.Vec
+}
+
+// placeArrays places every array of the request: sizes automatic radii,
+// lays near-field lines along the widest zone and returns the spots.
+func (ck *checker) placeArrays() ([]placedArray, error) {
+	req := ck.req
 	placed := make([]placedArray, len(req.Arrays))
 	for ai := range req.Arrays {
 		a := req.Arrays[ai]
@@ -127,10 +161,10 @@ func New(req *Request) (*Plan, error) {
 		case Line:
 			res.Radius = a.Offset
 		case NearField:
-			edge = edgeLine(points, a.XFrom, a.XTo)
+			edge = edgeLine(ck.points, a.XFrom, a.XTo)
 			res.Radius = a.Clearance
-			if a.Clearance < lim.Margin {
-				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %s is less than the %s margin: its stations will be blocked", ck.m(a.Clearance), ck.m(lim.Margin)))
+			if a.Clearance < ck.lim.Margin {
+				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %s is less than the %s margin: its stations will be blocked", ck.m(a.Clearance), ck.m(ck.lim.Margin)))
 			}
 			res.Notes = append(res.Notes, fmt.Sprintf("follows the edge of the widest conservative velocity zone (%s at the lip, spreading at %.1f° from the axis) at %s", ck.m(edge.r0), math.Atan(edge.slope)*180/math.Pi, ck.m(a.Clearance)))
 		}
@@ -140,10 +174,14 @@ func New(req *Request) (*Plan, error) {
 		res.Notes = append(res.Notes, notes...)
 		placed[ai] = placedArray{res: res, spots: sp, stand: stand, centre: res.Centre}
 	}
+	return placed, nil
+}
 
-	// stations with IDs, channels and stands
+// makeStations turns the placed spots into stations with IDs, channels,
+// stands and bases, and applies the as-built positions.
+func (ck *checker) makeStations(plan *Plan, placed []placedArray) error {
 	channel := 0
-	asBuilt := map[string]bool{}
+	used := map[string]bool{}
 	for ai := range placed {
 		pa := &placed[ai]
 		a := &pa.res.Spec
@@ -152,22 +190,7 @@ func New(req *Request) (*Plan, error) {
 		}
 		width := max(2, len(fmt.Sprint(len(pa.spots))))
 		for k, s := range pa.spots {
-			st := Station{
-				Array:     a.Name,
-				Kind:      a.Kind,
-				Index:     k + 1,
-				Mic:       s.mic,
-				Stand:     pa.stand,
-				Nominal:   s.nominal,
-				Incidence: a.Incidence,
-			}
-			if st.Incidence == 0 {
-				st.Incidence = NormalIncidence
-			}
-			st.ID = s.name
-			if st.ID == "" {
-				st.ID = fmt.Sprintf("%s-%0*d", a.Name, width, k+1)
-			}
+			st := ck.station(pa, k, s, width)
 			if a.Kind != Probes {
 				channel++
 				if s.channel > 0 {
@@ -175,68 +198,105 @@ func New(req *Request) (*Plan, error) {
 				}
 				st.Channel = channel
 			}
-			boom := 0.0
-			if pa.stand != nil {
-				boom = pa.stand.BoomLength
+			if st.Planned != nil {
+				used[st.ID] = true
 			}
-			if ab, ok := req.AsBuilt[st.ID]; ok {
-				planned := s.mic
-				st.Planned = &planned
-				s.mic, st.Mic = ab.Mic, ab.Mic
-				if pa.stand == nil {
-					s.mic.Z, st.Mic.Z = 0, 0
-				}
-				asBuilt[st.ID] = true
-			}
-			st.Base = standBase(s.mic, pa.centre, boom, req.Exit, a)
-			if ab, ok := req.AsBuilt[st.ID]; ok && ab.Base != nil {
-				st.Base = *ab.Base
-			}
-			st.Height = s.mic.Z
-			rel := req.Exit.ToJet(s.mic)
-			cx := req.Exit.ToJet(seenFrom(req, a)).X
-			q := geometry.JetPoint{X: rel.X - cx, R: rel.R}
-			st.Jet = rel
-			st.Radius = q.Distance()
-			st.Polar = req.Convention.FromDownstream(q.Polar())
-			st.AimAt = ck.aimPoint(points)
 			plan.Stations = append(plan.Stations, st)
 		}
 		pa.res.Stations = len(pa.spots)
 	}
 	if err := ck.uniqueIDs(plan.Stations); err != nil {
-		return nil, err
+		return err
 	}
+	return unknownAsBuilt(ck.req, used, plan.Stations)
+}
+
+// station returns the k-th station of a placed array at spot s, moved to its
+// as-built position if the request has one (then Planned is set), with its
+// base, its place in the jet frame and its polar angle. width is the number
+// of digits of generated IDs. The channel is left for the caller.
+func (ck *checker) station(pa *placedArray, k int, s spot, width int) Station {
+	req := ck.req
+	a := &pa.res.Spec
+	st := Station{
+		Array:     a.Name,
+		Kind:      a.Kind,
+		Index:     k + 1,
+		Mic:       s.mic,
+		Stand:     pa.stand,
+		Nominal:   s.nominal,
+		Incidence: a.Incidence,
+	}
+	if st.Incidence == 0 {
+		st.Incidence = NormalIncidence
+	}
+	st.ID = s.name
+	if st.ID == "" {
+		st.ID = fmt.Sprintf("%s-%0*d", a.Name, width, k+1)
+	}
+	boom := 0.0
+	if pa.stand != nil {
+		boom = pa.stand.BoomLength
+	}
+	if ab, ok := req.AsBuilt[st.ID]; ok {
+		planned := s.mic
+		st.Planned = &planned
+		s.mic, st.Mic = ab.Mic, ab.Mic
+		if pa.stand == nil {
+			s.mic.Z, st.Mic.Z = 0, 0
+		}
+	}
+	st.Base = standBase(s.mic, pa.centre, boom, req.Exit, a)
+	if ab, ok := req.AsBuilt[st.ID]; ok && ab.Base != nil {
+		st.Base = *ab.Base
+	}
+	st.Height = s.mic.Z
+	rel := req.Exit.ToJet(s.mic)
+	cx := req.Exit.ToJet(seenFrom(req, a)).X
+	q := geometry.JetPoint{X: rel.X - cx, R: rel.R}
+	st.Jet = rel
+	st.Radius = q.Distance()
+	st.Polar = req.Convention.FromDownstream(q.Polar())
+	st.AimAt = ck.aimPoint(ck.points)
+	return st
+}
+
+// unknownAsBuilt returns an error naming the as-built positions that match
+// no station of the plan (used names those that did).
+func unknownAsBuilt(req *Request, used map[string]bool, stations []Station) error {
 	var unknown []string
 	for id := range req.AsBuilt {
-		if !asBuilt[id] {
+		if !used[id] {
 			unknown = append(unknown, id)
 		}
 	}
-	if len(unknown) > 0 {
-		sort.Strings(unknown)
-		like := "it has none"
-		if len(plan.Stations) > 0 {
-			like = "its stations are named like " + plan.Stations[0].ID
-		}
-		return nil, fmt.Errorf("%w: %s %s not in the plan (%s)", ErrAsBuilt, plural(len(unknown), "station", "stations"), strings.Join(unknown, ", "), like)
+	if len(unknown) == 0 {
+		return nil
 	}
+	sort.Strings(unknown)
+	like := "it has none"
+	if len(stations) > 0 {
+		like = "its stations are named like " + stations[0].ID
+	}
+	return fmt.Errorf("%w: %s %s not in the plan (%s)", ErrAsBuilt, plural(len(unknown), "station", "stations"), strings.Join(unknown, ", "), like)
+}
 
-	// stand footprints and sight-line solids
+// indexSolids indexes the cell's obstacles, the stands' footprints and the
+// stands as sight-line solids (a stand is its pole and its base).
+func (ck *checker) indexSolids(stations []Station) {
 	var obst []geometry.Solid
-	obst = append(obst, req.Cell.Solids()...)
+	obst = append(obst, ck.req.Cell.Solids()...)
 	ck.obstacles = geometry.NewIndex(obst)
-	stands := make([]geometry.Solid, len(plan.Stations))
-	ck.feet = make([]foot, len(plan.Stations))
-	for i := range plan.Stations {
-		st := &plan.Stations[i]
+	stands := make([]geometry.Solid, len(stations))
+	ck.feet = make([]foot, len(stations))
+	for i := range stations {
+		st := &stations[i]
 		r, top := flushRadius, math.Max(st.Mic.Z, flushHeight)
 		if st.Stand != nil {
 			r = math.Max(st.Stand.BaseRadius, st.Stand.PoleDiameter/2)
 		}
 		ck.feet[i] = foot{at: st.Base, r: r}
 		ck.maxFoot = math.Max(ck.maxFoot, r)
-		// for sight lines a stand is its pole and its base
 		sr := r
 		if st.Stand != nil {
 			sr = st.Stand.PoleDiameter / 2
@@ -244,12 +304,14 @@ func New(req *Request) (*Plan, error) {
 		stands[i] = geometry.Solid{Name: st.ID, Footprint: geometry.Circle(st.Base, sr), ZMin: 0, ZMax: top}
 	}
 	ck.stands = geometry.NewIndex(stands)
+}
 
-	// check every station
+// checkStations runs every check on every station and counts the verdicts.
+func (ck *checker) checkStations(plan *Plan, placed []placedArray) {
 	si := 0
 	for ai := range placed {
 		pa := &placed[ai]
-		cx := req.Exit.ToJet(seenFrom(req, &pa.res.Spec)).X
+		cx := ck.req.Exit.ToJet(seenFrom(ck.req, &pa.res.Spec)).X
 		for range pa.spots {
 			ck.evaluate(&plan.Stations[si], si, &pa.res.Spec, cx)
 			si++
@@ -265,16 +327,18 @@ func New(req *Request) (*Plan, error) {
 			plan.Blocked++
 		}
 	}
+}
 
-	// array summaries
+// summarisePlan adds the array summaries, the absorption table and the
+// plan's warnings.
+func (ck *checker) summarisePlan(plan *Plan, placed []placedArray) {
 	for ai := range placed {
 		pa := &placed[ai]
 		ck.summarise(&pa.res, plan)
 		plan.Arrays = append(plan.Arrays, pa.res)
 	}
 	plan.Absorption = ck.absorptionTable(plan.Arrays, plan.Stations)
-	plan.Warnings = ck.warnings(atm)
-	return plan, nil
+	plan.Warnings = ck.warnings(ck.atm)
 }
 
 func indexOf(points []PointResult, name string) int {
