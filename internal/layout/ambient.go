@@ -105,16 +105,26 @@ func (d *decoder) limitsSection(top *section, amb planner.Ambient, ambOK bool) p
 		}
 		return v
 	}
+	// upper bounds; a value at most 0 is positive's message
+	atMost := func(key string, v float64, ok bool, r Range) {
+		if n := s.get(key); ok && v > 0 && n != nil {
+			d.checkRange(n.Line, s.field(key), r, v, "")
+		}
+	}
 	if n := s.get("velocity"); n != nil {
 		v, ok := d.velocity(n, s.field("velocity"))
 		l.Velocity = positive("velocity", v, ok, units.FormatVelocity(v, d.sys))
+		atMost("velocity", v, ok, VelocityLimitRange)
 	}
 	if n := s.get("temperature"); n != nil {
 		if t, ok := d.temperature(n, s.field("temperature")); ok {
 			l.Temperature = t
-			if ambOK && t <= amb.Temperature {
+			switch {
+			case ambOK && t <= amb.Temperature:
 				d.errorf(ErrInvalid, n.Line, s.field("temperature"), "the hot-zone limit %s must be above the ambient temperature %s",
 					units.FormatTemperature(t, d.sys), units.FormatTemperature(amb.Temperature, d.sys))
+			case t > MaxTotalTemperature:
+				d.checkRange(n.Line, s.field("temperature"), TempLimitRange, t, "")
 			}
 		}
 	}
@@ -132,14 +142,17 @@ func (d *decoder) limitsSection(top *section, amb planner.Ambient, ambOK bool) p
 	if n := s.get("inflow"); n != nil {
 		v, ok := d.velocity(n, s.field("inflow"))
 		l.Inflow = positive("inflow", v, ok, units.FormatVelocity(v, d.sys))
+		atMost("inflow", v, ok, Range{What: "inflow limit", Max: MaxVelocityLimit, MinOpen: true, Unit: "m/s"})
 	}
 	if n := s.get("far_field_ratio"); n != nil {
 		v, ok := d.number(n, s.field("far_field_ratio"), "the smallest arc radius over the jet diameter, a number")
 		l.FarFieldRatio = positive("far_field_ratio", v, ok, n.Value)
+		atMost("far_field_ratio", v, ok, Range{What: "far-field ratio", Max: MaxFarFieldRatio, MinOpen: true})
 	}
 	if n := s.get("absorption"); n != nil {
 		v, ok := d.decibels(n, s.field("absorption"))
 		l.Absorption = positive("absorption", v, ok, n.Value)
+		atMost("absorption", v, ok, Range{What: "absorption limit", Max: MaxAbsorption, MinOpen: true, Unit: "dB"})
 	}
 	return l
 }
@@ -175,6 +188,8 @@ func (d *decoder) bandSection(top *section) planner.Band {
 		if ok && f <= 0 {
 			d.errorf(ErrInvalid, n.Line, s.field(key), "must be greater than 0 Hz, got %s", units.FormatFrequency(f))
 			ok = false
+		} else if ok {
+			ok = d.checkRange(n.Line, s.field(key), BandRange, f, "")
 		}
 		return f, ok
 	}

@@ -3,6 +3,7 @@ package layout
 import (
 	"errors"
 	"fmt"
+	"strings"
 
 	"github.com/paulmach/orb"
 	"gonum.org/v1/gonum/spatial/r3"
@@ -120,6 +121,11 @@ func (d *decoder) nozzleShape(s *section, ni *nozzleInfo) {
 			return 0
 		}
 		v, good := d.positiveLength(n, s.field(key), what)
+		if good {
+			r := NozzleSizeRange
+			r.What = strings.TrimPrefix(what, "the ")
+			good = d.checkRange(n.Line, s.field(key), r, v, d.fmtShort(v))
+		}
 		ok = ok && good
 		return v
 	}
@@ -136,6 +142,8 @@ func (d *decoder) nozzleShape(s *section, ni *nozzleInfo) {
 			if ok && ar < 1 {
 				d.errorf(ErrInvalid, s.keyLine("aspect_ratio"), s.field("aspect_ratio"), "want the long side over the short side, at least 1, got %g", ar)
 				ok = false
+			} else if ok {
+				ok = d.checkRange(s.keyLine("aspect_ratio"), s.field("aspect_ratio"), AspectRatioRange, ar, "")
 			}
 			mach := d.nozzleNumber(s, "design_mach", "the design Mach number", false, &ok)
 			*nz = jet.RectangularFromAspect(de, ar, mach)
@@ -185,6 +193,9 @@ func (d *decoder) nozzleNumber(s *section, key, what string, required bool, ok *
 		return 0
 	}
 	v, good := d.number(n, s.field(key), what+", a number")
+	if good && key == "design_mach" && v > 1 { // at most 1 is the jet package's message
+		good = d.checkRange(n.Line, s.field(key), DesignMachRange, v, "")
+	}
 	*ok = *ok && good
 	return v
 }

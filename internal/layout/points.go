@@ -75,6 +75,9 @@ func (d *decoder) stream(s *section) (jet.Stream, bool) {
 	if n := s.need("npr", "the nozzle pressure ratio, total over ambient pressure, a number such as 1.8"); n != nil {
 		var good bool
 		st.NPR, good = d.number(n, s.field("npr"), "the nozzle pressure ratio, a number")
+		if good && st.NPR > 1 { // at most 1 is the jet package's message: no flow
+			good = d.checkRange(n.Line, s.field("npr"), NPRRange, st.NPR, "")
+		}
 		ok = ok && good
 	} else {
 		ok = false
@@ -87,10 +90,17 @@ func (d *decoder) stream(s *section) (jet.Stream, bool) {
 	case tt != nil:
 		var good bool
 		st.TotalTemperature, good = d.temperature(tt, s.field("total_temperature"))
+		if good && st.TotalTemperature > 0 {
+			good = d.checkRange(tt.Line, s.field("total_temperature"), TotalTemperatureRange, st.TotalTemperature,
+				short(st.TotalTemperature)+" K ("+tempC(st.TotalTemperature)+")")
+		}
 		ok = ok && good
 	case tr != nil:
 		var good bool
 		st.TemperatureRatio, good = d.number(tr, s.field("temperature_ratio"), "the total temperature over the ambient temperature, a number")
+		if good && st.TemperatureRatio > 0 {
+			good = d.checkRange(tr.Line, s.field("temperature_ratio"), TemperatureRatioRange, st.TemperatureRatio, "")
+		}
 		ok = ok && good
 	default:
 		if s.isMap {
@@ -106,6 +116,9 @@ func (d *decoder) stream(s *section) (jet.Stream, bool) {
 	if n := s.get("gas_constant"); n != nil {
 		var good bool
 		st.Gas.R, good = d.number(n, s.field("gas_constant"), "the specific gas constant in J/(kg K), a bare number")
+		if good && st.Gas.R > 0 {
+			good = d.checkRange(n.Line, s.field("gas_constant"), GasConstantRange, st.Gas.R, "")
+		}
 		ok = ok && good
 	}
 	if !ok {

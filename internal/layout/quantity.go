@@ -42,7 +42,12 @@ func (d *decoder) length(n *yaml.Node, field string) (float64, bool) {
 	if d.lenBad && n.Kind == yaml.ScalarNode && isBare(n.Value, units.Length, "m", "mm") {
 		return 0, false
 	}
-	return d.quantity(n, field, units.Length, d.lenUnit)
+	v, ok := d.quantity(n, field, units.Length, d.lenUnit)
+	if ok && math.Abs(v) > MaxLength {
+		d.errorf(ErrInvalid, n.Line, field, "the length %s is implausible; want at most 100 km (a cell or a pad, from its datum)", d.fmtShort(v))
+		return v, false
+	}
+	return v, ok
 }
 
 // positiveLength reads a length that must be greater than 0, m.

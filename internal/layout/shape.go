@@ -2,7 +2,6 @@ package layout
 
 import (
 	"fmt"
-	"math"
 	"strings"
 
 	"github.com/paulmach/orb"
@@ -14,7 +13,7 @@ import (
 
 // coords reads a point written as a list of dims lengths, [x, y] or
 // [x, y, z], m. line is where a wrong shape is reported. Each coordinate
-// must be at most geometry.MaxCoord from the datum.
+// must be at most MaxLength from the datum.
 func (d *decoder) coords(n *yaml.Node, field string, line, dims int) ([]float64, bool) {
 	want := "a point [x, y]"
 	if dims == 3 {
@@ -32,14 +31,8 @@ func (d *decoder) coords(n *yaml.Node, field string, line, dims int) ([]float64,
 	good := true
 	for i, it := range items {
 		f := index(field, i)
-		v, ok := d.length(it, f)
-		switch {
-		case !ok:
-			good = false
-		case math.Abs(v) > geometry.MaxCoord:
-			d.errorf(ErrInvalid, it.Line, f, "%s is more than %s from the datum", d.fmtLen(v), d.fmtLen(geometry.MaxCoord))
-			good = false
-		}
+		v, ok := d.length(it, f) // refuses more than MaxLength
+		good = good && ok
 		out[i] = v
 	}
 	return out, good

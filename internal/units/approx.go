@@ -14,7 +14,7 @@ import (
 func FormatLengthApprox(m float64, sys System) string {
 	mustSystem("FormatLengthApprox", sys)
 	a := math.Abs(m)
-	if math.IsNaN(m) || math.IsInf(m, 0) || a < 1e-3 {
+	if math.IsNaN(m) || math.IsInf(m, 0) || a < 1e-3 || a >= HugeValue {
 		return FormatLength(m, sys)
 	}
 	if sys == Imperial {

@@ -22,6 +22,8 @@ func TestFormatLengthApprox(t *testing.T) {
 		{121.66, "122 m", "399 ft"},
 		{490.1, "490 m", "1608 ft"},
 		{-2.5, "-2.50 m", "-8 ft 2 in"},
+		// 1e300 m = 3.281e300 ft (hand-computed): e-notation, not 300 digits.
+		{1e300, "1.000e+300 m", "3.281e+300 ft"},
 	}
 	for _, tt := range tests {
 		if got := FormatLengthApprox(tt.m, Metric); got != tt.metric {

@@ -10,15 +10,27 @@ import (
 // Printing. Every Format function takes an SI value and returns a string that
 // Parse reads back to within half of the printed resolution, which each
 // function's doc states (FormatTemperature notes one exception near 0 K). A value that rounds to zero prints without a minus
-// sign. NaN and ±Inf print as "NaN", "+Inf" or "-Inf" followed by the unit;
+// sign. A magnitude of HugeValue or more (in the printed unit) prints in
+// e-notation to four figures. NaN and ±Inf print as "NaN", "+Inf" or "-Inf" followed by the unit;
 // those strings do not parse back (Parse rejects them as not finite).
 //
 // The functions taking a System panic, as programmer misuse, if it is not
 // Metric or Imperial.
 
-// sixteenthsExact is the largest count of 1/16 in that a float64 holds
-// exactly (2⁵³); longer lengths print in whole feet.
-const sixteenthsExact = 1 << 53
+// HugeValue is the magnitude, in the printed unit, from which the Format
+// functions print a number in e-notation to four significant figures
+// ("1.000e+300 m") instead of in full: such a value is a slip or an
+// overflow, and three hundred digits help nobody. It parses back to within
+// 0.05 % of the value.
+const HugeValue = 1e12
+
+// huge returns v in e-notation when |v| ≥ HugeValue.
+func huge(v float64) (string, bool) {
+	if math.Abs(v) < HugeValue || math.IsInf(v, 0) || math.IsNaN(v) {
+		return "", false
+	}
+	return strconv.FormatFloat(v, 'e', 3, 64), true
+}
 
 // FormatLength prints a length given in metres.
 //
@@ -30,7 +42,7 @@ const sixteenthsExact = 1 << 53
 // reduced, inches always below 12: "16 ft 8 in", "2 ft 0 in",
 // "0 ft 1-15/16 in", "2 ft 1/2 in", and for negative values
 // "-3 ft 2-1/2 in" (the sign applies to the whole). Resolution 1/16 in.
-// Lengths beyond about 1.4×10¹³ m print in whole feet, "… ft 0 in".
+// From HugeValue (metres or feet) on, "1.000e+300 m" or "3.281e+300 ft".
 func FormatLength(m float64, sys System) string {
 	mustSystem("FormatLength", sys)
 	if math.IsNaN(m) || math.IsInf(m, 0) {
@@ -40,7 +52,13 @@ func FormatLength(m float64, sys System) string {
 		return fixed(m, 0) + " m"
 	}
 	if sys == Imperial {
+		if e, ok := huge(m / Foot); ok {
+			return e + " ft"
+		}
 		return withSign(m < 0, feetAndInches(math.Abs(m)))
+	}
+	if e, ok := huge(m); ok {
+		return e + " m"
 	}
 	a := math.Abs(m)
 	if mm := strconv.FormatFloat(a*1e3, 'f', 1, 64); len(mm) < len("1000.0") {
@@ -52,10 +70,7 @@ func FormatLength(m float64, sys System) string {
 // feetAndInches prints a non-negative finite length a (m) as feet, inches and
 // sixteenths.
 func feetAndInches(a float64) string {
-	n := math.Round(a / Inch * 16) // sixteenths of an inch
-	if n > sixteenthsExact {
-		return strconv.FormatFloat(math.Round(a/Foot), 'f', 0, 64) + " ft 0 in"
-	}
+	n := math.Round(a / Inch * 16) // sixteenths of an inch; below 2⁵³ from HugeValue
 	ft := math.Floor(n / 192)
 	rem := int(n - ft*192) // exact: n and ft*192 are integers below 2⁵³
 	in, num, den := rem/16, rem%16, 16
@@ -170,6 +185,9 @@ func FormatFrequency(hz float64) string {
 // fixed formats v with prec decimals and drops the minus sign of a result
 // that rounds to zero ("-0.0" becomes "0.0").
 func fixed(v float64, prec int) string {
+	if e, ok := huge(v); ok {
+		return e
+	}
 	s := strconv.FormatFloat(v, 'f', prec, 64)
 	if s[0] == '-' && strings.Trim(s[1:], "0.") == "" {
 		return s[1:]

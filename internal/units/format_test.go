@@ -43,6 +43,9 @@ func TestFormatLengthMetric(t *testing.T) {
 		{"NaN", math.NaN(), "NaN m"},
 		{"Inf", math.Inf(1), "+Inf m"},
 		{"minus Inf", math.Inf(-1), "-Inf m"},
+		// From HugeValue on, four figures in e-notation, never 300 digits.
+		{"huge", 1e300, "1.000e+300 m"},
+		{"huge negative", -2.5e15, "-2.500e+15 m"},
 	})
 }
 
@@ -63,8 +66,9 @@ func TestFormatLengthImperial(t *testing.T) {
 		{"rounds to sixteenth", 0.0254 * (1 + 5.2/16), "0 ft 1-5/16 in"},
 		{"zero", 0, "0 ft 0 in"},
 		{"negative rounds to zero", -0.0001, "0 ft 0 in"},
-		// 1e20 m / 0.3048 m/ft = 3.28084e20 ft: beyond 2⁵³ sixteenths, whole feet.
-		{"huge", 1e20, "328083989501312303104 ft 0 in"},
+		// 1e20 m = 3.28084e20 ft (hand-computed): from HugeValue, e-notation.
+		{"huge", 1e20, "3.281e+20 ft"},
+		{"huge negative", -1e300, "-3.281e+300 ft"},
 		{"NaN", math.NaN(), "NaN ft"},
 	})
 }
@@ -99,6 +103,8 @@ func TestFormatPressure(t *testing.T) {
 		{"bar", 1e5, "100.00 kPa"},
 		{"small", 4, "0.00 kPa"},
 		{"negative small", -4, "0.00 kPa"},
+		// 1e300 Pa = 1e297 kPa: from HugeValue, four figures in e-notation.
+		{"huge", 1e300, "1.000e+297 kPa"},
 	})
 	checkFormat(t, "FormatPressure", inSystem(FormatPressure, Imperial), []formatCase{
 		{"atmosphere", 101325, "14.70 psi"},
