@@ -31,6 +31,7 @@ type AirOptions struct {
 func (o *AirOptions) AddFlags(fs *pflag.FlagSet) {
 	temp := newQuantity(units.Temperature, "", &o.Temperature, "")
 	temp.doubt = doubtful(150, 400, "K")
+	temp.plausible = &layout.AmbientTempRange
 	fs.Var(temp, "temperature", "air temperature, e.g. 20C (without a layout)")
 	hum := newQuantity(units.Fraction, "%", &o.Humidity, "")
 	hum.doubt = func(v float64) string {
@@ -39,13 +40,15 @@ func (o *AirOptions) AddFlags(fs *pflag.FlagSet) {
 		}
 		return ""
 	}
+	hum.plausible = &layout.Range{What: "relative humidity", Min: 0, Max: 1, Show: func(v float64) string { return strconv.FormatFloat(100*v, 'g', 4, 64) + " %" }}
 	fs.Var(&percentFlag{hum}, "humidity", "relative humidity in percent, e.g. 70% (without a layout)")
 	pres := newQuantity(units.Pressure, "", &o.Pressure, "101.325kPa")
 	pres.doubt = doubtful(10e3, 200e3, "Pa")
+	pres.plausible = &layout.AmbientPressureRange
 	fs.Var(pres, "pressure", "air pressure (without a layout)")
 	fs.Var(newQuantity(units.Frequency, "", &o.From, "50Hz"), "from", "lowest band centre (without a layout)")
 	fs.Var(newQuantity(units.Frequency, "", &o.To, "100kHz"), "to", "highest band centre (without a layout)")
-	fs.Var(&quantityList{dim: units.Length, values: &o.Distances}, "distance", "paths to give the loss over, e.g. 3m,5m (without a layout)")
+	fs.Var(&quantityList{dim: units.Length, values: &o.Distances, plausible: &layout.DistanceRange}, "distance", "paths to give the loss over, e.g. 3m,5m (without a layout)")
 	formatFlag(fs, &o.Format, "text", "csv", "json")
 }
 

@@ -2,11 +2,13 @@ package main
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 	"strings"
 
 	"github.com/spf13/pflag"
 
+	"arcwright/internal/layout"
 	"arcwright/internal/units"
 )
 
@@ -21,6 +23,8 @@ type quantityFlag struct {
 	// doubt, when set, returns why a bare number is probably a slip (it
 	// is read in SI units, and a diameter of "50.8" is 50.8 m), or "".
 	doubt func(v float64) string
+	// plausible, when set, is the range every value must lie in.
+	plausible *layout.Range
 }
 
 func newQuantity(dim units.Dim, bare string, value *float64, def string) *quantityFlag {
@@ -45,6 +49,11 @@ func (q *quantityFlag) Set(s string) error {
 	if _, perr := strconv.ParseFloat(strings.TrimSpace(s), 64); perr == nil && q.doubt != nil {
 		if why := q.doubt(v); why != "" {
 			return fmt.Errorf("%q is read as %s, which is implausible here; give a unit, e.g. %s", s, why, q.example())
+		}
+	}
+	if q.plausible != nil {
+		if err := q.plausible.Check(v); err != nil {
+			return err
 		}
 	}
 	*q.value, q.text, q.set = v, s, true
@@ -77,11 +86,39 @@ func doubtful(lo, hi float64, sym string) func(float64) string {
 	}
 }
 
+// numberFlag is a flag holding a plain number (a ratio, a Mach number)
+// that must be finite and inside a plausible range.
+type numberFlag struct {
+	value     *float64
+	plausible layout.Range
+	text      string
+}
+
+func newNumber(value *float64, def float64, r layout.Range) *numberFlag {
+	*value = def
+	return &numberFlag{value: value, plausible: r, text: strconv.FormatFloat(def, 'g', -1, 64)}
+}
+
+func (n *numberFlag) String() string { return n.text }
+func (n *numberFlag) Type() string   { return "number" }
+func (n *numberFlag) Set(s string) error {
+	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
+	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
+		return fmt.Errorf("want a finite number, the %s (%s), got %q", n.plausible.What, n.plausible.Want(), s)
+	}
+	if err := n.plausible.Check(v); err != nil {
+		return err
+	}
+	*n.value, n.text = v, s
+	return nil
+}
+
 // quantityList is a comma-separated list of quantities ("0.5m,1m,2 m").
 type quantityList struct {
-	dim    units.Dim
-	values *[]float64
-	text   string
+	dim       units.Dim
+	values    *[]float64
+	text      string
+	plausible *layout.Range // when set, the range every value must lie in
 }
 
 func (l *quantityList) String() string { return l.text }
@@ -91,6 +128,11 @@ func (l *quantityList) Set(s string) error {
 		v, err := units.Parse(part, l.dim, "")
 		if err != nil {
 			return err
+		}
+		if l.plausible != nil {
+			if err := l.plausible.Check(v); err != nil {
+				return err
+			}
 		}
 		*l.values = append(*l.values, v)
 	}

@@ -138,15 +138,15 @@ func TestPlumeErrors(t *testing.T) {
 		code int
 		want string
 	}{
-		{"NPR below 1", append(base, "--npr", "0.8"), exitError, "--npr: nozzle pressure ratio must be greater than 1"},
+		{"NPR below 1", append(base, "--npr", "0.8"), exitUsage, `"--npr" flag: the nozzle pressure ratio 0.8 is implausible; want above 1 up to 50`},
 		{"temperature on a length", []string{"plume", "--diameter", "15C", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `invalid argument "15C" for "--diameter" flag: want a length, got "15C"`},
 		{"unknown unit", []string{"plume", "--diameter", "5 furlongs", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `"--diameter"`},
-		{"negative diameter", []string{"plume", "--diameter", "-5mm", "--npr", "1.5", "--temperature-ratio", "1"}, exitError, "--diameter: nozzle diameter must be greater than 0 m"},
-		{"gamma 1", append(base, "--npr", "1.5", "--gamma", "1"), exitError, "--gamma: ratio of specific heats must be greater than 1"},
+		{"negative diameter", []string{"plume", "--diameter", "-5mm", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `"--diameter" flag: the nozzle dimension -5.0 mm is implausible`},
+		{"gamma 1", append(base, "--npr", "1.5", "--gamma", "1"), exitUsage, `"--gamma" flag: the ratio of specific heats 1 is implausible; want above 1`},
 		{"no NPR", base, exitUsage, "--npr is required"},
 		{"no temperature", []string{"plume", "--diameter", "1in", "--npr", "1.5"}, exitUsage, "exactly one of --total-temperature and --temperature-ratio"},
-		{"limit below ambient", append(base, "--npr", "1.5", "--temperature-limit", "10C"), exitError, "--temperature-limit: temperature limit"},
-		{"unknown point", []string{"plume", "--layout", demoDir + "/anechoic-model-jet.yaml", "--point", "XX"}, exitError, `no operating point named "XX"`},
+		{"limit below ambient", append(base, "--npr", "1.5", "--temperature-limit", "10C"), exitUsage, "--temperature-limit: temperature limit"},
+		{"unknown point", []string{"plume", "--layout", demoDir + "/anechoic-model-jet.yaml", "--point", "XX"}, exitUsage, `--point: no operating point named "XX"`},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {

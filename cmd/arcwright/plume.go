@@ -38,8 +38,9 @@ type PlumeOptions struct {
 // AddFlags binds the options to fs.
 func (o *PlumeOptions) AddFlags(fs *pflag.FlagSet) {
 	o.flags = map[string]*quantityFlag{}
-	q := func(name string, dim units.Dim, bare string, v *float64, def, usage string) {
+	q := func(name string, dim units.Dim, bare string, v *float64, def string, r layout.Range, usage string) {
 		f := newQuantity(dim, bare, v, def)
+		f.plausible = &r
 		switch dim {
 		case units.Length:
 			f.doubt = doubtful(0, 20, "m")
@@ -54,23 +55,23 @@ func (o *PlumeOptions) AddFlags(fs *pflag.FlagSet) {
 	fs.StringVar(&o.Layout, "layout", "", "read the nozzle, ambient and limits from this layout file")
 	fs.StringVar(&o.Point, "point", "", "with --layout: the operating point to predict")
 	fs.Var(newChoice(&o.Nozzle, "convergent", "convergent", "cd", "rectangular", "coaxial"), "nozzle", "nozzle kind: convergent, cd (convergent-divergent), rectangular, coaxial")
-	q("diameter", units.Length, "", &o.Diameter, "", "exit diameter (area-equivalent for rectangular, primary for coaxial), e.g. 50.8mm or 2in")
-	fs.Float64Var(&o.DesignMach, "design-mach", 0, "design Mach number of a cd nozzle (also rectangular cd)")
-	fs.Float64Var(&o.AspectRatio, "aspect-ratio", 1, "width over height of a rectangular exit")
-	fs.Float64Var(&o.NPR, "npr", 0, "nozzle pressure ratio, total over ambient pressure (> 1)")
-	q("total-temperature", units.Temperature, "", &o.TotalTemperature, "", "total temperature, e.g. 800K or 527C")
-	fs.Float64Var(&o.TempRatio, "temperature-ratio", 0, "total temperature over ambient (1 for an unheated jet); instead of --total-temperature")
-	fs.Float64Var(&o.SecondaryNPR, "secondary-npr", 0, "coaxial: nozzle pressure ratio of the secondary stream")
-	q("secondary-total-temperature", units.Temperature, "", &o.SecondaryTotal, "", "coaxial: total temperature of the secondary stream")
-	fs.Float64Var(&o.SecondaryRatio, "secondary-temperature-ratio", 0, "coaxial: total-temperature ratio of the secondary stream")
-	q("secondary-diameter", units.Length, "", &o.SecondaryDiameter, "", "coaxial: outer diameter of the secondary annulus")
-	fs.Float64Var(&o.Gamma, "gamma", jet.GammaAir, "ratio of specific heats of the jet gas (about 1.33–1.35 for combustion products)")
-	fs.Float64Var(&o.GasConstant, "gas-constant", jet.RAir, "gas constant of the jet gas, J/(kg K)")
-	q("ambient-temperature", units.Temperature, "", &o.AmbientTemperature, "15C", "ambient temperature")
-	q("ambient-pressure", units.Pressure, "", &o.AmbientPressure, "101.325kPa", "ambient pressure")
-	q("velocity-limit", units.Velocity, "", &o.VelocityLimit, "5m/s", "mean velocity that bounds the velocity zone")
-	q("temperature-limit", units.Temperature, "", &o.TemperatureLimit, "50C", "temperature that bounds the hot zone")
-	fs.Var(&quantityList{dim: units.Length, values: &o.At}, "at", "extra axial distances for the profile table, e.g. 0.5m,1m,2m")
+	q("diameter", units.Length, "", &o.Diameter, "", layout.NozzleSizeRange, "exit diameter (area-equivalent for rectangular, primary for coaxial), e.g. 50.8mm or 2in")
+	fs.Var(newNumber(&o.DesignMach, 0, layout.DesignMachRange), "design-mach", "design Mach number of a cd nozzle (also rectangular cd), "+layout.DesignMachRange.Want())
+	fs.Var(newNumber(&o.AspectRatio, 1, layout.AspectRatioRange), "aspect-ratio", "width over height of a rectangular exit, "+layout.AspectRatioRange.Want())
+	fs.Var(newNumber(&o.NPR, 0, layout.NPRRange), "npr", "nozzle pressure ratio, total over ambient pressure, "+layout.NPRRange.Want())
+	q("total-temperature", units.Temperature, "", &o.TotalTemperature, "", layout.TotalTemperatureRange, "total temperature, e.g. 800K or 527C")
+	fs.Var(newNumber(&o.TempRatio, 0, layout.TemperatureRatioRange), "temperature-ratio", "total temperature over ambient (1 for an unheated jet), "+layout.TemperatureRatioRange.Want()+"; instead of --total-temperature")
+	fs.Var(newNumber(&o.SecondaryNPR, 0, layout.NPRRange), "secondary-npr", "coaxial: nozzle pressure ratio of the secondary stream")
+	q("secondary-total-temperature", units.Temperature, "", &o.SecondaryTotal, "", layout.TotalTemperatureRange, "coaxial: total temperature of the secondary stream")
+	fs.Var(newNumber(&o.SecondaryRatio, 0, layout.TemperatureRatioRange), "secondary-temperature-ratio", "coaxial: total-temperature ratio of the secondary stream")
+	q("secondary-diameter", units.Length, "", &o.SecondaryDiameter, "", layout.NozzleSizeRange, "coaxial: outer diameter of the secondary annulus")
+	fs.Var(newNumber(&o.Gamma, jet.GammaAir, layout.GammaRange), "gamma", "ratio of specific heats of the jet gas (about 1.33–1.35 for combustion products)")
+	fs.Var(newNumber(&o.GasConstant, jet.RAir, layout.GasConstantRange), "gas-constant", "gas constant of the jet gas, J/(kg K)")
+	q("ambient-temperature", units.Temperature, "", &o.AmbientTemperature, "15C", layout.AmbientTempRange, "ambient temperature")
+	q("ambient-pressure", units.Pressure, "", &o.AmbientPressure, "101.325kPa", layout.AmbientPressureRange, "ambient pressure")
+	q("velocity-limit", units.Velocity, "", &o.VelocityLimit, "5m/s", layout.VelocityLimitRange, "mean velocity that bounds the velocity zone")
+	q("temperature-limit", units.Temperature, "", &o.TemperatureLimit, "50C", layout.TempLimitRange, "temperature that bounds the hot zone")
+	fs.Var(&quantityList{dim: units.Length, values: &o.At, plausible: &layout.DistanceRange}, "at", "extra axial distances for the profile table, e.g. 0.5m,1m,2m")
 	formatFlag(fs, &o.Format, "text", "json", "csv")
 	unitsFlag(fs, &o.Units)
 }
@@ -92,7 +93,7 @@ its operating points with --layout and --point. Quantities take units: 50.8mm,
 Examples:
   arcwright plume --diameter 50.8mm --npr 1.86 --total-temperature 800K
   arcwright plume --nozzle cd --design-mach 1.5 --diameter 2in --npr 3.67 --temperature-ratio 1
-  arcwright plume --layout layouts/anechoic-model-jet.yaml --point hot-0.9 --format json
+  arcwright plume --layout layouts/anechoic-model-jet.yaml --point HS-090 --format json
 
 Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
 		Args: noArgs,
@@ -152,7 +153,7 @@ func plumeInputs(o *PlumeOptions, fs *pflag.FlagSet) (jet.Nozzle, jet.Condition,
 				return req.Nozzle, c, jl, sys, nil
 			}
 		}
-		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, fmt.Errorf("%s: no operating point named %q; the layout has %s", o.Layout, o.Point, pointNames(req.Points))
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{fmt.Errorf("--point: no operating point named %q in %s; the layout has %s", o.Point, o.Layout, pointNames(req.Points))}
 	}
 	missing := func(name, what string) error {
 		return usageError{fmt.Errorf("--%s is required: %s", name, what)}
@@ -191,7 +192,7 @@ func plumeInputs(o *PlumeOptions, fs *pflag.FlagSet) (jet.Nozzle, jet.Condition,
 		n.Kind, n.DesignMach = jet.ConvergentDivergent, o.DesignMach
 	case "rectangular":
 		if o.AspectRatio < 1 {
-			return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, fmt.Errorf("--aspect-ratio must be at least 1 (width over height), got %g", o.AspectRatio)
+			return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{fmt.Errorf("--aspect-ratio must be at least 1 (width over height), got %g", o.AspectRatio)}
 		}
 		n = jet.RectangularFromAspect(o.Diameter, o.AspectRatio, o.DesignMach)
 	case "coaxial":
@@ -247,8 +248,8 @@ func runPlume(o *PlumeOptions, fs *pflag.FlagSet, w io.Writer) error {
 	if err != nil {
 		var ie *jet.InputError
 		if o.Layout == "" && errors.As(err, &ie) {
-			if f, ok := flagOf[ie.Field]; ok {
-				return fmt.Errorf("%s: %s %s", f, ie.Field, ie.Reason)
+			if f, ok := flagOf[ie.Field]; ok { // a bad combination of flags
+				return usageError{fmt.Errorf("%s: %s %s", f, ie.Field, ie.Reason)}
 			}
 		}
 		return err

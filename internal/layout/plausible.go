@@ -98,11 +98,12 @@ var (
 	NPRRange              = Range{What: "nozzle pressure ratio", Min: 1, Max: MaxNPR, MinOpen: true}
 	TotalTemperatureRange = Range{What: "total temperature", Min: MinTotalTemperature, Max: MaxTotalTemperature, Unit: "K"}
 	TemperatureRatioRange = Range{What: "total-temperature ratio", Min: MinTemperatureRatio, Max: MaxTemperatureRatio}
+	GammaRange            = Range{What: "ratio of specific heats", Min: 1, Max: 5.0 / 3, MinOpen: true}
 	GasConstantRange      = Range{What: "gas constant", Min: MinGasConstant, Max: MaxGasConstant, Unit: "J/(kg K)"}
 	NozzleSizeRange       = Range{What: "nozzle dimension", Min: MinNozzleSize, Max: MaxNozzleSize, Unit: "m", Show: metricLength}
 	DesignMachRange       = Range{What: "design Mach number", Min: 1, Max: MaxDesignMach, MinOpen: true}
 	AspectRatioRange      = Range{What: "aspect ratio", Min: 1, Max: MaxAspectRatio}
-	AmbientPressureRange  = Range{What: "ambient pressure", Min: MinPressure, Max: MaxPressure, Unit: "Pa"}
+	AmbientPressureRange  = Range{What: "ambient pressure", Min: MinPressure, Max: MaxPressure, Unit: "Pa", Show: kPa}
 	AmbientTempRange      = Range{What: "ambient temperature", Min: MinTemperature, Max: MaxTemperature, Unit: "K"}
 	VelocityLimitRange    = Range{What: "velocity limit", Min: 0, Max: MaxVelocityLimit, MinOpen: true, Unit: "m/s"}
 	TempLimitRange        = Range{What: "temperature limit", Min: MinTemperature, Max: MaxTotalTemperature, Unit: "K"}
@@ -142,6 +143,9 @@ func (r Range) show(v float64) string {
 	}
 	return short(v) + r.unit()
 }
+
+// kPa prints a pressure, Pa, in kilopascals.
+func kPa(p float64) string { return units.FormatPressure(p, units.Metric) }
 
 // metricLength prints a length, m, to about three figures in metric units.
 func metricLength(m float64) string { return units.FormatLengthApprox(m, units.Metric) }

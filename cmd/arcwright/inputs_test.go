@@ -1,0 +1,79 @@
+package main
+
+import (
+	"regexp"
+	"strings"
+	"testing"
+)
+
+// TestPlumeImplausibleFlags checks that values no test uses are refused on
+// the command line, before any work, with exit status 2, naming the flag
+// and the plausible range (issue 10, items 1 and 10).
+func TestPlumeImplausibleFlags(t *testing.T) {
+	base := []string{"plume", "--diameter", "50.8mm", "--npr", "1.86", "--temperature-ratio", "1"}
+	coax := []string{"plume", "--nozzle", "coaxial", "--diameter", "50.8mm", "--secondary-diameter", "100mm", "--npr", "1.86", "--temperature-ratio", "1", "--secondary-temperature-ratio", "1"}
+	tests := []struct {
+		name string
+		args []string
+		flag string
+		want string
+	}{
+		{"npr huge", append(base, "--npr", "1e304"), "--npr", "want above 1 up to 50"},
+		{"npr NaN", append(base, "--npr", "NaN"), "--npr", "finite"},
+		{"npr Inf", append(base, "--npr", "+Inf"), "--npr", "finite"},
+		{"npr below one", append(base, "--npr", "0.9"), "--npr", "above 1"},
+		{"diameter huge", append(base, "--diameter", "1e200m"), "--diameter", "1.0 mm to 10.0 m"},
+		{"diameter NaN", append(base, "--diameter", "NaNmm"), "--diameter", "want a length"},
+		{"temperature ratio", append(base, "--temperature-ratio", "1e300"), "--temperature-ratio", "0.5 to 12"},
+		{"total temperature", []string{"plume", "--diameter", "50.8mm", "--npr", "1.86", "--total-temperature", "1e9K"}, "--total-temperature", "150 K to 3000 K"},
+		{"gamma", append(base, "--gamma", "NaN"), "--gamma", "finite"},
+		{"gas constant", append(base, "--gas-constant", "1e9"), "--gas-constant", "implausible"},
+		{"ambient pressure", append(base, "--ambient-pressure", "1e9Pa"), "--ambient-pressure", "30.00 kPa to 130.00 kPa"},
+		{"velocity limit", append(base, "--velocity-limit", "1e9m/s"), "--velocity-limit", "implausible"},
+		{"profile distance", append(base, "--at", "1e300m"), "--at", "implausible"},
+		{"secondary npr", append(coax, "--secondary-npr", "1e100"), "--secondary-npr", "want above 1 up to 50"},
+		{"design Mach", []string{"plume", "--nozzle", "cd", "--design-mach", "40", "--diameter", "2in", "--npr", "3", "--temperature-ratio", "1"}, "--design-mach", "above 1 up to 5"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			out, errOut, code := arc(t, tt.args...)
+			if code != exitUsage {
+				t.Errorf("got exit %d, want %d (a bad command line); stderr %q", code, exitUsage, errOut)
+			}
+			if out != "" {
+				t.Errorf("got output %q, want none: the flags are checked before any work", out)
+			}
+			if !strings.Contains(errOut, `"`+tt.flag+`"`) || !strings.Contains(errOut, tt.want) {
+				t.Errorf("got stderr %q, want it to name %s and say %q", errOut, tt.flag, tt.want)
+			}
+		})
+	}
+}
+
+// TestAirImplausibleFlags checks the air command's flags the same way.
+func TestAirImplausibleFlags(t *testing.T) {
+	for _, args := range [][]string{
+		{"air", "--temperature", "20C", "--humidity", "300%"},
+		{"air", "--temperature", "1e9K", "--humidity", "30%"},
+		{"air", "--temperature", "20C", "--humidity", "30%", "--pressure", "1e9Pa"},
+		{"air", "--temperature", "20C", "--humidity", "30%", "--distance", "1e300m"},
+	} {
+		if _, errOut, code := arc(t, args...); code != exitUsage || !strings.Contains(errOut, "implausible") {
+			t.Errorf("%v: got exit %d, stderr %q, want exit %d and the plausible range", args, code, errOut, exitUsage)
+		}
+	}
+}
+
+// TestPlumeHelpExample runs the --layout example of the plume command's
+// help: its point must exist in the demo (issue 10, item 14).
+func TestPlumeHelpExample(t *testing.T) {
+	help, _, _ := arc(t, "plume", "--help")
+	m := regexp.MustCompile(`arcwright plume (--layout \S+ --point \S+.*)`).FindStringSubmatch(help)
+	if m == nil {
+		t.Fatalf("the help has no --layout example:\n%s", help)
+	}
+	args := append([]string{"plume"}, strings.Fields(strings.ReplaceAll(m[1], "layouts/", demoDir+"/"))...)
+	if _, errOut, code := arc(t, args...); code != exitOK {
+		t.Errorf("%v: got exit %d, stderr %q, want 0", args, code, errOut)
+	}
+}
