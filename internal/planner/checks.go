@@ -129,6 +129,7 @@ type checker struct {
 	sources   []r3.Vec
 	srcPoint  string // the point whose source region is longest
 	maxFoot   float64
+	splashes  []splash    // where zones strike obstacles
 	fresnel   [][]float64 // L²/λ per point and band, m
 }
 
@@ -341,6 +342,9 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		oc.Reason = fmt.Sprintf("%s from %s", ck.m(obst), oname)
 	default:
 		oc.Reason = fmt.Sprintf("%s from %s", ck.m(obst), oname)
+	}
+	if oc.Verdict != Blocked {
+		ck.splashCheck(&oc, oname, st, arm, armPen)
 	}
 	t.add(oc)
 

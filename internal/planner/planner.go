@@ -35,7 +35,8 @@ func plural(n int, one, many string) string {
 // It runs in phases, each a function below: predict the operating points,
 // prepare the checks (newChecker), place the arrays (placeArrays), name the
 // stations and apply the as-built positions (makeStations), index the
-// solids (indexSolids), check the stations (checkStations) and summarise
+// solids (indexSolids), find where zones strike obstacles (findSplashes),
+// check the stations (checkStations) and summarise
 // (summarisePlan).
 func New(req *Request) (*Plan, error) {
 	if err := validate(req); err != nil {
@@ -60,6 +61,7 @@ func New(req *Request) (*Plan, error) {
 		return nil, err
 	}
 	ck.indexSolids(plan.Stations)
+	ck.splashes = ck.findSplashes()
 	ck.checkStations(plan, placed)
 	ck.summarisePlan(plan, placed)
 	return plan, nil

@@ -5,8 +5,6 @@ import (
 	"math"
 	"strings"
 
-	"github.com/paulmach/orb"
-
 	"arcwright/internal/acoustics"
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
@@ -208,47 +206,23 @@ func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
 }
 
 // impingement says where a point's conservative zones reach the walls, the
-// floor or the ceiling upstream of the collector: there the exhaust turns
-// into a wall jet that the free-jet model does not describe.
+// floor, the ceiling or an obstacle upstream of the collector (zoneReaches):
+// there the exhaust turns into a wall jet that the free-jet model does not
+// describe.
 func (ck *checker) impingement(p *PointResult) []string {
-	req := ck.req
-	cell := &req.Cell
-	f := req.Exit
-	capture := math.Inf(1)
-	if cell.Collector != nil && p.Capture != Blocked {
-		capture = f.ToJet(cell.Collector.Inlet).X
-	}
+	capture := captureX(ck.req, p)
 	var out []string
 	for _, z := range []struct {
 		name string
 		env  *jet.Envelope
 	}{{"velocity zone", p.Velocity()}, {"hot zone", p.Hot()}} {
-		wall, floor, ceiling := math.Inf(1), math.Inf(1), math.Inf(1)
-		for _, q := range z.env.Points {
-			x, r := q[0], q[1]
-			if x >= capture {
-				break
+		for _, c := range zoneReaches(ck.req, ck.obstacles, z.env, capture) {
+			if c.surface == surfaceObstacle {
+				out = append(out, fmt.Sprintf("%s: the %s strikes the obstacle %s about %s downstream of the exit: the exhaust spreads along its faces there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of it", p.Name, z.name, ck.req.Cell.Obstacles[c.obstacle].Name, ck.m(c.x)))
+				continue
 			}
-			for _, az := range []float64{0, math.Pi} {
-				c := f.ToCell(geometry.JetPoint{X: x, R: r, Azimuth: az})
-				if cell.Bounded() && !cell.Contains(orb.Point{c.X, c.Y}) {
-					wall = math.Min(wall, x)
-				}
-			}
-			if f.Exit.Z-r < 0 {
-				floor = math.Min(floor, x)
-			}
-			if f.Exit.Z+r > cell.Ceiling {
-				ceiling = math.Min(ceiling, x)
-			}
-		}
-		for _, hit := range []struct {
-			x    float64
-			what string
-		}{{wall, "the " + ck.boundaryName()}, {floor, "the " + ck.floorName()}, {ceiling, "the ceiling"}} {
-			if !math.IsInf(hit.x, 1) {
-				out = append(out, fmt.Sprintf("%s: the %s reaches %s about %s downstream of the exit: the exhaust spreads along it there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of that surface", p.Name, z.name, hit.what, ck.m(hit.x)))
-			}
+			what := map[surface]string{surfaceBoundary: ck.boundaryName(), surfaceFloor: ck.floorName(), surfaceCeiling: "ceiling"}[c.surface]
+			out = append(out, fmt.Sprintf("%s: the %s reaches the %s about %s downstream of the exit: the exhaust spreads along it there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of that surface", p.Name, z.name, what, ck.m(c.x)))
 		}
 	}
 	return out
