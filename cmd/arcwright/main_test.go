@@ -8,7 +8,6 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
-	"time"
 
 	"github.com/spf13/cobra"
 )
@@ -269,13 +268,12 @@ func TestPlanGolden(t *testing.T) {
 // and writes nothing when the input is bad.
 func TestPlanWrites(t *testing.T) {
 	dir := t.TempDir()
-	fixed := func() time.Time { return time.Date(2026, 12, 1, 0, 0, 0, 0, time.UTC) }
 	files := func(tag string) []string {
 		return []string{filepath.Join(dir, tag+".pdf"), filepath.Join(dir, tag+".csv"), filepath.Join(dir, tag+".json"), filepath.Join(dir, tag+".geojson")}
 	}
 	for _, tag := range []string{"a", "b"} {
 		f := files(tag)
-		o := &PlanOptions{Layout: demoDir + "/hard-wall-exhaust-room.yaml", PDF: f[0], CSV: f[1], JSON: f[2], GeoJSON: f[3], Format: "text", Now: fixed}
+		o := &PlanOptions{Layout: demoDir + "/hard-wall-exhaust-room.yaml", PDF: f[0], CSV: f[1], JSON: f[2], GeoJSON: f[3], Format: "text"}
 		var out bytes.Buffer
 		if err := runPlan(o, &out); err != nil {
 			t.Fatal(err)

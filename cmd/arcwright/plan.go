@@ -6,9 +6,7 @@ import (
 	"fmt"
 	"io"
 	"math"
-	"strconv"
 	"strings"
-	"time"
 
 	"github.com/spf13/cobra"
 	"github.com/spf13/pflag"
@@ -26,8 +24,6 @@ type PlanOptions struct {
 	Layout                      string
 	JSON, CSV, GeoJSON, PDF     string
 	Format, Paper, Scale, Units string
-	// Now is the clock for the sheet's issue date when the layout has none.
-	Now func() time.Time
 }
 
 // AddFlags binds the options to fs.
@@ -37,13 +33,13 @@ func (o *PlanOptions) AddFlags(fs *pflag.FlagSet) {
 	fs.StringVar(&o.JSON, "json", "", "write the whole plan (JSON) to this file")
 	fs.StringVar(&o.GeoJSON, "geojson", "", "write stations, arcs, zones and obstacles (GeoJSON, cell frame in metres) to this file")
 	formatFlag(fs, &o.Format, "text", "json")
-	fs.StringVar(&o.Paper, "paper", "", "sheet paper: A4, A3, Letter or Tabloid (default: the layout's, else A3)")
-	fs.StringVar(&o.Scale, "scale", "", "sheet scale, e.g. 1:50 (default: the layout's, else the largest standard scale that fits)")
+	fs.StringVar(&o.Paper, "paper", "", "sheet paper: A4 to A0, Letter, Tabloid, ANSI C to E or Arch A to E1 (default: the layout's, else A3)")
+	fs.StringVar(&o.Scale, "scale", "", `plan scale: 1:50, or 1" = 20' on a feet-and-inches sheet (default: the layout's, else the largest standard scale that fits)`)
 	unitsFlag(fs, &o.Units)
 }
 
 func newPlanCommand(stdout io.Writer) *cobra.Command {
-	o := &PlanOptions{Now: time.Now}
+	o := &PlanOptions{}
 	c := &cobra.Command{
 		Use:   "plan LAYOUT",
 		Short: "Place every station, check it for every operating point, write the sheet and exports",
@@ -54,7 +50,14 @@ sight to the source region, far field, floor reflection, air absorption,
 entrained inflow, buoyant plumes), and print a summary: stations ok, warned and
 blocked, the governing operating point, automatic radii, and what blocks what.
 
---pdf writes the floor layout sheet; --csv, --json and --geojson write the
+--pdf writes the floor layout sheet; --paper and --scale choose its paper and
+the plan's scale (ISO 5455 scales 1:1 to 1:5000 with 1:25 and 1:75; on a
+feet-and-inches sheet also the architect's 1/4" = 1'-0" and the engineer's
+1" = 20' kinds). A site too large for the paper is drawn cropped to its
+stations, zones and nozzle. The sheet's date is the layout's title date;
+without one the sheet says "not dated" and the PDF carries the fixed date
+2000-01-01, so the same layout always gives the same bytes.
+--csv, --json and --geojson write the
 exports. Files are only written when planning succeeds, each one whole or not
 at all. --format json prints the plan as JSON on standard output instead of
 the summary.
@@ -76,17 +79,28 @@ answer; use 'arcwright check' as a gate), 1 on bad input or a failed write,
 	return c
 }
 
-// parseScale reads "1:50" or "50".
+// parseScale reads --scale: "1:50", "50" or a feet-and-inches scale such
+// as 1" = 20'; "" is 0 (choose).
 func parseScale(s string) (int, error) {
-	if s == "" {
+	if strings.TrimSpace(s) == "" {
 		return 0, nil
 	}
-	t := strings.TrimPrefix(strings.ReplaceAll(s, " ", ""), "1:")
-	n, err := strconv.Atoi(t)
-	if err != nil || n <= 0 {
-		return 0, usageError{fmt.Errorf("--scale: want a scale such as 1:50, got %q", s)}
+	n, err := sheet.ParseScale(s)
+	if err != nil {
+		return 0, usageError{fmt.Errorf("--scale %q is not a standard scale: want one of %s", s, sheet.ScaleNames())}
 	}
 	return n, nil
+}
+
+// checkPaper reads --paper; "" is fine (the layout's or A3).
+func checkPaper(s string) error {
+	if strings.TrimSpace(s) == "" {
+		return nil
+	}
+	if _, err := sheet.ParsePaper(s); err != nil {
+		return usageError{fmt.Errorf("--paper %q is not a paper size: want one of %s", s, sheet.PaperNames())}
+	}
+	return nil
 }
 
 func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error) {
@@ -121,6 +135,12 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	if err != nil {
 		return err
 	}
+	if err := checkPaper(o.Paper); err != nil {
+		return err
+	}
+	if o.PDF == "" && (o.Paper != "" || o.Scale != "") {
+		return usageError{fmt.Errorf("--paper and --scale choose the sheet's paper and scale: give --pdf too")}
+	}
 	p, err := loadPlan(o.Layout, o.Units, "")
 	if err != nil {
 		return err
@@ -143,7 +163,7 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 		return nil
 	}
 	if err := render(o.PDF, func(b io.Writer) error {
-		return sheet.Write(b, p, sheet.Options{Paper: o.Paper, Scale: scale, Now: o.Now})
+		return sheet.Write(b, p, sheet.Options{Paper: o.Paper, Scale: scale})
 	}); err != nil {
 		return err
 	}

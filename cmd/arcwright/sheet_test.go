@@ -8,7 +8,6 @@ import (
 	"strconv"
 	"strings"
 	"testing"
-	"time"
 
 	"arcwright/internal/sheet"
 )
@@ -27,7 +26,7 @@ func TestDemoSheets(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			m, err := sheet.Build(p, sheet.Options{Now: func() time.Time { return time.Date(2026, 12, 1, 0, 0, 0, 0, time.UTC) }})
+			m, err := sheet.Build(p, sheet.Options{})
 			if err != nil {
 				t.Fatal(err)
 			}

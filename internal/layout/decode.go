@@ -2,14 +2,15 @@ package layout
 
 import (
 	"errors"
+	"fmt"
 	"io/fs"
 	"os"
-	"strconv"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
 
 	"arcwright/internal/planner"
+	"arcwright/internal/sheet"
 	"arcwright/internal/units"
 )
 
@@ -23,8 +24,6 @@ var (
 	unitsKeys   = []string{"length", "sheet"}
 	sheetKeys   = []string{"scale", "paper"}
 	lengthUnits = []string{"m", "mm", "cm", "in", "ft"}
-	paperNames  = []string{"A4", "A3", "Letter", "Tabloid"}
-	scaleNames  = []string{"1:10", "1:20", "1:25", "1:50", "1:100", "1:200"}
 	conventions = map[string]planner.Convention{"from_jet_axis": planner.FromJetAxis, "from_inlet": planner.FromInlet}
 )
 
@@ -164,13 +163,25 @@ func (d *decoder) titleSection(top *section) planner.Title {
 func (d *decoder) sheetSection(top *section) planner.SheetOptions {
 	s := top.sub("sheet", sheetKeys)
 	var o planner.SheetOptions
+	// the sheet's own lists, so that the layout and --scale/--paper accept
+	// the same scales and papers
 	if n := s.get("scale"); n != nil {
-		if v, ok := d.choice(n, s.field("scale"), scaleNames); ok {
-			o.Scale, _ = strconv.Atoi(strings.TrimPrefix(v, "1:")) // v is one of scaleNames
+		if v, ok := d.text(n, s.field("scale")); ok {
+			if den, err := sheet.ParseScale(v); err == nil {
+				o.Scale = den
+			} else {
+				d.add(ErrInvalid, nil, n.Line, s.field("scale"), fmt.Sprintf("want a standard scale (%s), got %q", sheet.ScaleNames(), v))
+			}
 		}
 	}
 	if n := s.get("paper"); n != nil {
-		o.Paper, _ = d.choice(n, s.field("paper"), paperNames)
+		if v, ok := d.text(n, s.field("paper")); ok {
+			if p, err := sheet.ParsePaper(v); err == nil {
+				o.Paper = p.Name
+			} else {
+				d.add(ErrInvalid, nil, n.Line, s.field("paper"), fmt.Sprintf("want one of %s, got %q", sheet.PaperNames(), v))
+			}
+		}
 	}
 	return o
 }

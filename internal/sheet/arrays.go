@@ -52,13 +52,15 @@ func arcPointAt(c r3.Vec, ss []*planner.Station, theta float64) (r3.Vec, bool) {
 		if theta < lo-1e-9 || theta > hi+1e-9 || hi-lo < 1e-9 {
 			continue
 		}
-		t := (theta - a.Polar) / (b.Polar - a.Polar)
-		pts := slerp(c, a.Mic, b.Mic, math.Abs(b.Polar-a.Polar)/64)
-		f := t * float64(len(pts)-1)
-		k := int(math.Floor(f))
-		if k >= len(pts)-1 {
-			return pts[len(pts)-1], true
+		// theta may lie up to 1e-9 outside [lo, hi]: clamp, so that the
+		// index below is never −1 or past the end
+		t := clamp((theta-a.Polar)/(b.Polar-a.Polar), 0, 1)
+		pts := slerp(c, a.Mic, b.Mic, math.Max(math.Abs(b.Polar-a.Polar)/64, 1e-3))
+		if len(pts) < 2 {
+			return a.Mic, true
 		}
+		f := t * float64(len(pts)-1)
+		k := min(int(math.Floor(f)), len(pts)-2)
 		return r3.Add(pts[k], r3.Scale(f-float64(k), r3.Sub(pts[k+1], pts[k]))), true
 	}
 	return r3.Vec{}, false

@@ -1,7 +1,6 @@
 package sheet
 
 import (
-	"fmt"
 	"io"
 	"sort"
 	"strings"
@@ -50,6 +49,7 @@ type builder struct {
 	keyPlaced bool    // the label key is on sheet 1
 	zs        zoneSet // the zones drawn
 	ranges    string  // the first range label on the plan, "" if none
+	cropped   bool    // the plan shows the region of interest, not the whole cell
 }
 
 // Build lays out the sheet set of plan p: pages, scale, every drawn item's
@@ -79,7 +79,7 @@ func Build(p *planner.Plan, opt Options) (*Model, error) {
 		model: &Model{Paper: paper},
 	}
 	b.frame = Rect{marginLeft, marginOther, paper.Width - marginLeft - marginOther, paper.Height - 2*marginOther}
-	b.colW = clamp(0.27*b.frame.W, 92, 112)
+	b.colW = columnWidth(b.frame.W)
 	b.byArray = make(map[string][]*planner.Station)
 	for i := range p.Stations {
 		s := &p.Stations[i]
@@ -88,7 +88,7 @@ func Build(p *planner.Plan, opt Options) (*Model, error) {
 	for _, ss := range b.byArray {
 		sort.SliceStable(ss, func(i, j int) bool { return ss[i].Index < ss[j].Index })
 	}
-	b.dates(opt)
+	b.dates()
 	m := b.model
 	m.Units = req.Units.String()
 	m.Convention = b.pr.convention()
@@ -118,27 +118,32 @@ func Write(w io.Writer, p *planner.Plan, opt Options) error {
 // PDF's creation date.
 var issueLayouts = []string{"2006-01-02", "2006/01/02", "02.01.2006", "2 Jan 2006", "2 January 2006", "January 2, 2006", "Jan 2, 2006"}
 
-// dates sets the issue date printed and the PDF's fixed creation date: the
-// title block's date when it parses, else the clock's date, at 00:00 UTC.
-func (b *builder) dates(opt Options) {
-	now := opt.Now
-	if now == nil {
-		now = time.Now
-	}
+// Undated is the creation date written into the PDF of a layout without a
+// readable title date (00:00 UTC on 1 January 2000), so that the same
+// layout gives the same bytes on every machine, in every time zone, on
+// every day. Give the layout a date (title: date: 2026-03-14) to date the
+// sheet.
+var Undated = time.Date(2000, 1, 1, 0, 0, 0, 0, time.UTC)
+
+// undatedText is the issue date printed when the layout gives none.
+const undatedText = "not dated (title: date)"
+
+// dates sets the issue date printed and the PDF's fixed creation and
+// modification date: the title block's date, and that date at 00:00 UTC
+// when it reads as a date, else [Undated]. No clock is read.
+func (b *builder) dates() {
 	given := strings.TrimSpace(b.req.Title.Date)
-	if given != "" {
-		b.model.IssueDate = clean(given)
-		for _, l := range issueLayouts {
-			if t, err := time.Parse(l, given); err == nil {
-				b.model.Created = time.Date(t.Year(), t.Month(), t.Day(), 0, 0, 0, 0, time.UTC)
-				return
-			}
-		}
-	}
-	t := now()
-	b.model.Created = time.Date(t.Year(), t.Month(), t.Day(), 0, 0, 0, 0, time.UTC)
+	b.model.IssueDate = clean(given)
+	b.model.Created = Undated
 	if given == "" {
-		b.model.IssueDate = b.model.Created.Format("2006-01-02")
+		b.model.IssueDate = undatedText
+		return
+	}
+	for _, l := range issueLayouts {
+		if t, err := time.Parse(l, given); err == nil {
+			b.model.Created = time.Date(t.Year(), t.Month(), t.Day(), 0, 0, 0, 0, time.UTC)
+			return
+		}
 	}
 }
 
@@ -208,7 +213,7 @@ func (b *builder) continuation() {
 		f.page.Views = append(f.page.Views, View{Name: "elevation", Frame: ev.frame, Scale: b.model.ElevationScale, Shapes: ev.shapes})
 		f.page.Labels = append(f.page.Labels, ev.labels...)
 		f.page.Texts = append(f.page.Texts, ev.texts...)
-		title += fmt.Sprintf(" — scale 1:%d", b.model.ElevationScale)
+		title += " — scale " + ScaleName(b.model.ElevationScale, b.req.Units)
 		f.y += h + 4
 	} else {
 		title += " — not drawn: it fits no standard scale on this paper"

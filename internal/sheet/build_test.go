@@ -21,9 +21,6 @@ var update = flag.Bool("update", false, "rewrite the golden files in testdata")
 // an error.
 func build(t testing.TB, p *planner.Plan, opt sheet.Options) *sheet.Model {
 	t.Helper()
-	if opt.Now == nil {
-		opt.Now = fixedClock
-	}
 	m, err := sheet.Build(p, opt)
 	if err != nil {
 		t.Fatalf("Build: %v", err)
@@ -94,15 +91,19 @@ func TestBuildPaperAndScale(t *testing.T) {
 		{name: "letter", plan: chamberPlan, opt: sheet.Options{Paper: " Letter "}, paper: "Letter", scale: 100},
 		{name: "smaller scale asked", plan: chamberPlan, opt: sheet.Options{Scale: 100}, paper: "A3", scale: 100},
 		{name: "non-standard scale asked", plan: chamberPlan, opt: sheet.Options{Scale: 75}, paper: "A3", scale: 75},
-		{name: "unknown paper", plan: chamberPlan, opt: sheet.Options{Paper: "A5"}, err: sheet.ErrUnknownPaper, errSubstr: []string{`"A5"`, "Options.Paper"}},
-		{name: "scale that does not fit", plan: chamberPlan, opt: sheet.Options{Scale: 20}, err: sheet.ErrScale, errSubstr: []string{"Options.Scale", "1:20", "1:50 would"}},
-		{name: "negative scale", plan: chamberPlan, opt: sheet.Options{Scale: -50}, err: sheet.ErrScale, errSubstr: []string{"Options.Scale"}},
-		{name: "pad at 1:200", plan: func(t testing.TB) *planner.Plan { return padPlan(t, 60) }, paper: "A3", scale: 200},
+		{name: "unknown paper", plan: chamberPlan, opt: sheet.Options{Paper: "A5"}, err: sheet.ErrUnknownPaper, errSubstr: []string{`"A5"`, "paper asked for", "A0", "ANSI D"}},
+		{name: "scale that does not fit", plan: chamberPlan, opt: sheet.Options{Scale: 20}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "1:20", "1:50 fits on A3", "A1 paper holds it at 1:20"}},
+		{name: "negative scale", plan: chamberPlan, opt: sheet.Options{Scale: -50}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "not a standard scale"}},
+		{name: "odd scale", plan: chamberPlan, opt: sheet.Options{Scale: 7}, err: sheet.ErrScale, errSubstr: []string{"1:7", "not a standard scale", "1:75"}},
+		// a feet-and-inches sheet takes the engineer's 1" = 20' (1:240):
+		// the pad's 60 stations need 1:200, which is not one of them
+		{name: "pad at 1 in = 20 ft", plan: func(t testing.TB) *planner.Plan { return padPlan(t, 60) }, paper: "A3", scale: 240},
+		{name: "A0", plan: chamberPlan, opt: sheet.Options{Paper: "A0"}, paper: "A0", scale: 20},
+		{name: "ANSI D alias", plan: chamberPlan, opt: sheet.Options{Paper: "ansi-d"}, paper: "ANSI D", scale: 25},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
 			opt := tt.opt
-			opt.Now = fixedClock
 			m, err := sheet.Build(tt.plan(t), opt)
 			if tt.err != nil {
 				if !errors.Is(err, tt.err) {
@@ -130,14 +131,14 @@ func TestBuildPaperAndScale(t *testing.T) {
 func TestScaleFromPlan(t *testing.T) {
 	p := chamberPlan(t)
 	p.Request.Sheet.Scale = 10
-	_, err := sheet.Build(p, sheet.Options{Now: fixedClock})
-	if !errors.Is(err, sheet.ErrScale) || !strings.Contains(err.Error(), "Request.Sheet.Scale") {
-		t.Fatalf("got %v, want an ErrScale naming Request.Sheet.Scale", err)
+	_, err := sheet.Build(p, sheet.Options{})
+	if !errors.Is(err, sheet.ErrScale) || !strings.Contains(err.Error(), "layout's sheet scale") {
+		t.Fatalf("got %v, want an ErrScale naming the layout's sheet scale", err)
 	}
 	p.Request.Sheet.Paper = "B4"
-	_, err = sheet.Build(p, sheet.Options{Now: fixedClock})
-	if !errors.Is(err, sheet.ErrUnknownPaper) || !strings.Contains(err.Error(), "Request.Sheet.Paper") {
-		t.Fatalf("got %v, want an ErrUnknownPaper naming Request.Sheet.Paper", err)
+	_, err = sheet.Build(p, sheet.Options{})
+	if !errors.Is(err, sheet.ErrUnknownPaper) || !strings.Contains(err.Error(), "layout's sheet paper") {
+		t.Fatalf("got %v, want an ErrUnknownPaper naming the layout's sheet paper", err)
 	}
 }
 
@@ -174,7 +175,7 @@ func TestBuildRejectsBadPlan(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			_, err := sheet.Build(tt.edit(chamberPlan(t)), sheet.Options{Now: fixedClock})
+			_, err := sheet.Build(tt.edit(chamberPlan(t)), sheet.Options{})
 			if !errors.Is(err, sheet.ErrInvalidPlan) {
 				t.Fatalf("got error %v, want one wrapping ErrInvalidPlan", err)
 			}
@@ -230,7 +231,6 @@ func stationRow(t *testing.T, m *sheet.Model, id string) []string {
 }
 
 func TestIssueDate(t *testing.T) {
-	later := func() time.Time { return time.Date(2026, 1, 2, 23, 59, 0, 0, time.UTC) }
 	tests := []struct {
 		name, date string
 		wantIssue  string
@@ -238,14 +238,15 @@ func TestIssueDate(t *testing.T) {
 	}{
 		{"ISO date from the title block", "2025-03-10", "2025-03-10", time.Date(2025, 3, 10, 0, 0, 0, 0, time.UTC)},
 		{"written date from the title block", "7 April 2025", "7 April 2025", time.Date(2025, 4, 7, 0, 0, 0, 0, time.UTC)},
-		{"free text keeps the clock for the PDF date", "spring 2025", "spring 2025", time.Date(2026, 1, 2, 0, 0, 0, 0, time.UTC)},
-		{"no date: the clock's", "", "2026-01-02", time.Date(2026, 1, 2, 0, 0, 0, 0, time.UTC)},
+		// no clock: free text and a missing date give the fixed date
+		{"free text gives the fixed PDF date", "spring 2025", "spring 2025", sheet.Undated},
+		{"no date: said so, and the fixed PDF date", "", "not dated (title: date)", sheet.Undated},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
 			p := chamberPlan(t)
 			p.Request.Title.Date = tt.date
-			m := build(t, p, sheet.Options{Now: later})
+			m := build(t, p, sheet.Options{})
 			if m.IssueDate != tt.wantIssue || !m.Created.Equal(tt.wantCreate) {
 				t.Errorf("got issue %q created %v, want %q and %v", m.IssueDate, m.Created, tt.wantIssue, tt.wantCreate)
 			}

@@ -89,7 +89,7 @@ func (b *builder) elevationFit(w, maxH float64) (u0, u1 float64, top float64, sc
 	if a0, a1, t, _ := b.elevExtent(false); fits(a1-a0, t+floorBand, aw, ah, scale) {
 		return a0, a1, t, scale, true
 	}
-	scale, ok = chooseScale(u1-u0, top+floorBand, aw, ah)
+	scale, ok = chooseScale(scalesFor(b.req.Units), u1-u0, top+floorBand, aw, ah)
 	return u0, u1, top, scale, ok
 }
 

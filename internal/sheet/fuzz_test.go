@@ -31,7 +31,7 @@ func FuzzBuild(f *testing.F) {
 			s.Base[1] += dy
 		}
 		p.Request.Title.Title = title
-		m, err := sheet.Build(p, sheet.Options{Paper: paper, Scale: scale, Now: fixedClock})
+		m, err := sheet.Build(p, sheet.Options{Paper: paper, Scale: scale})
 		if err != nil {
 			if !errors.Is(err, sheet.ErrUnknownPaper) && !errors.Is(err, sheet.ErrScale) && !errors.Is(err, sheet.ErrInvalidPlan) {
 				t.Fatalf("got an error wrapping none of the sentinels: %v", err)

@@ -174,7 +174,9 @@ func slerp(c, a, b r3.Vec, maxStep float64) []r3.Vec {
 	if w < 1e-9 || math.Pi-w < 1e-3 {
 		return []r3.Vec{a, b}
 	}
-	n := int(math.Ceil(w / maxStep))
+	// at most 4096 steps, whatever maxStep is (a tiny or zero step must
+	// not run away)
+	n := int(math.Min(math.Ceil(w/maxStep), 4096))
 	out := make([]r3.Vec, 0, n+1)
 	uh, vh := r3.Scale(1/lu, u), r3.Scale(1/lv, v)
 	sw := math.Sin(w)

@@ -78,13 +78,13 @@ func nozzleLen(d float64) float64 { return 3 * d }
 func (b *builder) planPage(asked int, field string) error {
 	vf := Rect{b.frame.X, b.frame.Y, b.frame.W - b.colW - gapMM, b.frame.H - stripH}
 	inner := vf.inset(viewPad)
-	ext := b.planExtent()
-	w, h := ext.Max[0]-ext.Min[0], ext.Max[1]-ext.Min[1]
-	scale, err := scaleFor(asked, field, w, h, inner.W, inner.H, b.model.Paper.Name)
+	fit, err := b.fitPlan(asked, field, inner.W, inner.H)
 	if err != nil {
 		return err
 	}
+	ext, scale := fit.ext, fit.scale
 	b.model.Scale = scale
+	b.cropped = fit.cropped
 	cx, cy := (ext.Min[0]+ext.Max[0])/2, (ext.Min[1]+ext.Max[1])/2
 	v := &planView{
 		b: b, frame: vf,

@@ -35,7 +35,7 @@ func TestRenderIsDeterministic(t *testing.T) {
 			var outs [2][]byte
 			for i := range outs {
 				var buf bytes.Buffer
-				if err := sheet.Write(&buf, tt.plan(t), sheet.Options{Now: fixedClock}); err != nil {
+				if err := sheet.Write(&buf, tt.plan(t), sheet.Options{}); err != nil {
 					t.Fatal(err)
 				}
 				outs[i] = buf.Bytes()
@@ -50,16 +50,34 @@ func TestRenderIsDeterministic(t *testing.T) {
 	}
 }
 
-// TestRenderDateFromIssueDate: with a date in the title block the PDF does
-// not depend on the clock.
+// TestRenderDateFromIssueDate: the PDF's dates come from the title block,
+// and without one from the fixed [sheet.Undated], never from the clock or
+// the time zone (issue 10 item 17).
 func TestRenderDateFromIssueDate(t *testing.T) {
-	a := render(t, build(t, chamberPlan(t), sheet.Options{Now: fixedClock}))
-	b := render(t, build(t, chamberPlan(t), sheet.Options{Now: func() time.Time { return fixedClock().AddDate(1, 0, 0) }}))
-	if !bytes.Equal(a, b) {
-		t.Fatal("the PDF changed with the clock although the title block gives the date")
-	}
+	a := render(t, build(t, chamberPlan(t), sheet.Options{}))
 	if !bytes.Contains(a, []byte("D:20250310000000")) {
 		t.Error("got no creation date D:20250310000000 (the title block's 2025-03-10) in the PDF")
+	}
+	p := chamberPlan(t)
+	p.Request.Title.Date = ""
+	var outs [][]byte
+	for _, tz := range []string{"UTC", "Pacific/Kiritimati", "Pacific/Pago_Pago"} {
+		loc, err := time.LoadLocation(tz)
+		if err != nil {
+			loc = time.FixedZone(tz, 14*3600)
+		}
+		old := time.Local
+		time.Local = loc
+		outs = append(outs, render(t, build(t, p, sheet.Options{})))
+		time.Local = old
+	}
+	for i := 1; i < len(outs); i++ {
+		if !bytes.Equal(outs[0], outs[i]) {
+			t.Fatal("an undated layout gave different PDFs in different time zones")
+		}
+	}
+	if !bytes.Contains(outs[0], []byte("D:20000101000000")) {
+		t.Error("got no creation date D:20000101000000 (sheet.Undated) in the PDF of an undated layout")
 	}
 }
 
@@ -124,7 +142,7 @@ func TestReadBackWithPoppler(t *testing.T) {
 		}},
 		{"chamber A4", chamberPlan, sheet.Options{Paper: "A4"}, []string{"Scale 1:100 on A4", "A4 landscape", "5 m"}},
 		{"pad imperial", func(t testing.TB) *planner.Plan { return padPlan(t, 60) }, sheet.Options{}, []string{
-			"Scale 1:200 on A3", "Pad 7 engine noise survey", "EN-41", "feet and inches", "polar angle measured from the inlet",
+			`Scale 1" = 20' (1:240) on A3`, `plan 1" = 20'`, "Pad 7 engine noise survey", "EN-41", "feet and inches", "polar angle measured from the inlet",
 			"16.4 ft/s", "122.0 °F", "open sky", "50 ft",
 		}},
 	}

@@ -4,20 +4,129 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 
 	"arcwright/internal/units"
 )
 
-// standardScales are the scale denominators the sheet chooses from, largest
-// drawing first: the ISO 5455:1979 recommended reduction scales 1:10, 1:20,
-// 1:50, 1:100, 1:200, 1:500, 1:1000 and 1:2000 (acoustics.md §8.4, FROM
-// MEMORY), with 1:25, common on building plans (common practice). The last
-// three serve outdoor pads.
-var standardScales = []int{10, 20, 25, 50, 100, 200, 500, 1000, 2000}
+// metricScales are the scale denominators a metric sheet chooses from,
+// largest drawing first: the ISO 5455:1979 recommended scales 1:1, 1:2, 1:5
+// and their decades up to 1:5000 (acoustics.md §8.4, FROM MEMORY), with
+// 1:25 and 1:75, which drawing offices use for building plans (common
+// practice). 1:500 to 1:5000 serve outdoor sites.
+var metricScales = []int{1, 2, 5, 10, 20, 25, 50, 75, 100, 200, 500, 1000, 2000, 5000}
 
-// StandardScales returns the scale denominators Build chooses from, largest
-// drawing first.
-func StandardScales() []int { return append([]int(nil), standardScales...) }
+// imperialScale is a scale of a feet-and-inches sheet: its denominator and
+// how a drawing office writes it.
+type imperialScale struct {
+	den  int
+	name string
+}
+
+// imperialScales are the scales a feet-and-inches sheet chooses from,
+// largest drawing first: the architect's scales (3″ = 1′-0″ is 1:4 …
+// 1/8″ = 1′-0″ is 1:96) for rooms and the engineer's scales (1″ = 10′ is
+// 1:120 … 1″ = 500′ is 1:6000) for sites; the denominator is the feet
+// per inch times 12 (common practice; hand-computed denominators).
+var imperialScales = []imperialScale{
+	{4, `3" = 1'-0"`}, {8, `1-1/2" = 1'-0"`}, {12, `1" = 1'-0"`}, {16, `3/4" = 1'-0"`},
+	{24, `1/2" = 1'-0"`}, {32, `3/8" = 1'-0"`}, {48, `1/4" = 1'-0"`}, {64, `3/16" = 1'-0"`},
+	{96, `1/8" = 1'-0"`},
+	{120, `1" = 10'`}, {240, `1" = 20'`}, {360, `1" = 30'`}, {480, `1" = 40'`}, {600, `1" = 50'`},
+	{720, `1" = 60'`}, {1200, `1" = 100'`}, {2400, `1" = 200'`}, {3600, `1" = 300'`},
+	{4800, `1" = 400'`}, {6000, `1" = 500'`},
+}
+
+// scalesFor returns the denominators the sheet chooses from in the unit
+// system sys, largest drawing first.
+func scalesFor(sys units.System) []int {
+	if sys == units.Imperial {
+		out := make([]int, len(imperialScales))
+		for i, s := range imperialScales {
+			out[i] = s.den
+		}
+		return out
+	}
+	return append([]int(nil), metricScales...)
+}
+
+// StandardScales returns every scale denominator the sheet accepts: the
+// metric ones, then the feet-and-inches ones, each largest drawing first.
+func StandardScales() []int { return append(scalesFor(units.Metric), scalesFor(units.Imperial)...) }
+
+// isStandard reports whether 1:den is one of [StandardScales].
+func isStandard(den int) bool {
+	for _, s := range StandardScales() {
+		if s == den {
+			return true
+		}
+	}
+	return false
+}
+
+// ScaleName prints the scale 1:den as a drawing office of the unit system
+// writes it: "1:50", or `1" = 20' (1:240)` for a feet-and-inches scale on
+// an imperial sheet.
+func ScaleName(den int, sys units.System) string {
+	if sys == units.Imperial {
+		for _, s := range imperialScales {
+			if s.den == den {
+				return s.name + " (1:" + strconv.Itoa(den) + ")"
+			}
+		}
+	}
+	return "1:" + strconv.Itoa(den)
+}
+
+// ScaleNames lists the accepted scales for messages and help.
+func ScaleNames() string {
+	var m, arch, eng []string
+	for _, s := range metricScales {
+		m = append(m, "1:"+strconv.Itoa(s))
+	}
+	for _, s := range imperialScales {
+		if s.den < 120 {
+			arch = append(arch, strings.TrimSuffix(s.name, ` = 1'-0"`))
+		} else {
+			eng = append(eng, strings.TrimPrefix(s.name, `1" = `))
+		}
+	}
+	return strings.Join(m, ", ") + `; on feet-and-inches sheets also ` + strings.Join(arch, ", ") + ` = 1'-0" and 1" = ` + strings.Join(eng, ", ")
+}
+
+// scaleKey normalises a written scale for comparison: no spaces, inches
+// and feet as " and ', no trailing -0".
+func scaleKey(s string) string {
+	s = strings.ToLower(strings.Join(strings.Fields(s), ""))
+	for _, r := range []struct{ from, to string }{
+		{"″", `"`}, {"′", "'"}, {"inches", `"`}, {"inch", `"`}, {"in", `"`},
+		{"feet", "'"}, {"foot", "'"}, {"ft", "'"}, {"''", `"`},
+	} {
+		s = strings.ReplaceAll(s, r.from, r.to)
+	}
+	return strings.TrimSuffix(strings.TrimSuffix(s, `-0"`), `0"`)
+}
+
+// ParseScale reads a scale as a user writes it: "1:50", "50", or a
+// feet-and-inches scale such as `1" = 20'`, `1in=20ft` or `1/4" = 1'-0"`.
+// It returns the denominator, one of [StandardScales]; the error wraps
+// [ErrScale] and lists the scales.
+func ParseScale(s string) (int, error) {
+	t := strings.TrimSpace(s)
+	if n, err := strconv.Atoi(strings.TrimPrefix(strings.ReplaceAll(t, " ", ""), "1:")); err == nil {
+		if isStandard(n) {
+			return n, nil
+		}
+		return 0, fmt.Errorf("%w: %q is not a standard scale: want one of %s", ErrScale, t, ScaleNames())
+	}
+	k := scaleKey(t)
+	for _, sc := range imperialScales {
+		if scaleKey(sc.name) == k {
+			return sc.den, nil
+		}
+	}
+	return 0, fmt.Errorf("%w: %q is not a scale: want one of %s", ErrScale, t, ScaleNames())
+}
 
 // fits reports whether a world extent of w × h metres fits a drawing area
 // of aw × ah millimetres at 1:scale.
@@ -26,38 +135,16 @@ func fits(w, h, aw, ah float64, scale int) bool {
 	return w*k <= aw && h*k <= ah
 }
 
-// chooseScale returns the largest standard scale (smallest denominator) at
-// which a w × h m extent fits an aw × ah mm area, and false if none does.
-func chooseScale(w, h, aw, ah float64) (int, bool) {
-	for _, s := range standardScales {
+// chooseScale returns the largest scale of the list (smallest denominator)
+// at which a w × h m extent fits an aw × ah mm area, and false if none
+// does.
+func chooseScale(list []int, w, h, aw, ah float64) (int, bool) {
+	for _, s := range list {
 		if fits(w, h, aw, ah, s) {
 			return s, true
 		}
 	}
 	return 0, false
-}
-
-// scaleFor returns the plan's scale: the one asked for (asked > 0) when it
-// fits, or the largest standard scale that fits. field names the option
-// that asked, for the error.
-func scaleFor(asked int, field string, w, h, aw, ah float64, paper string) (int, error) {
-	best, ok := chooseScale(w, h, aw, ah)
-	if asked > 0 {
-		if fits(w, h, aw, ah, asked) {
-			return asked, nil
-		}
-		if ok {
-			return 0, fmt.Errorf("%w: %s asks for 1:%d, but the plan (%.1f × %.1f m) does not fit the drawing area on %s at it; 1:%d would",
-				ErrScale, field, asked, w, h, paper, best)
-		}
-		return 0, fmt.Errorf("%w: %s asks for 1:%d, but the plan (%.1f × %.1f m) does not fit the drawing area on %s at it nor at 1:%d; a larger paper is needed",
-			ErrScale, field, asked, w, h, paper, standardScales[len(standardScales)-1])
-	}
-	if !ok {
-		return 0, fmt.Errorf("%w: the plan (%.1f × %.1f m) does not fit the drawing area on %s even at 1:%d; use a larger paper",
-			ErrScale, w, h, paper, standardScales[len(standardScales)-1])
-	}
-	return best, nil
 }
 
 // niceSteps are the round steps for grids and scale bars, as multiples of a

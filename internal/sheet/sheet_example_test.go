@@ -19,7 +19,7 @@ func (exampleT) Fatalf(format string, a ...any) { panic(fmt.Sprintf(format, a...
 // takes the largest standard scale that fits.
 func ExampleBuild() {
 	p := chamberPlan(exampleT{})
-	m, err := sheet.Build(p, sheet.Options{Now: fixedClock})
+	m, err := sheet.Build(p, sheet.Options{})
 	if err != nil {
 		fmt.Println(err)
 		return
@@ -34,18 +34,18 @@ func ExampleBuild() {
 }
 
 // Write builds and renders in one call. Asking for a scale the plan does
-// not fit at is an error that names the scale that would fit.
+// not fit at is an error that names the scale and the paper that would.
 func ExampleWrite() {
 	p := chamberPlan(exampleT{})
 	var buf bytes.Buffer
-	if err := sheet.Write(&buf, p, sheet.Options{Paper: "A4", Now: fixedClock}); err != nil {
+	if err := sheet.Write(&buf, p, sheet.Options{Paper: "A4"}); err != nil {
 		fmt.Println(err)
 		return
 	}
 	fmt.Println(string(buf.Bytes()[:5]))
-	err := sheet.Write(&buf, p, sheet.Options{Paper: "A4", Scale: 50, Now: fixedClock})
+	err := sheet.Write(&buf, p, sheet.Options{Paper: "A4", Scale: 50})
 	fmt.Println(err)
 	// Output:
 	// %PDF-
-	// sheet: scale does not fit: Options.Scale asks for 1:50, but the plan (12.8 × 10.8 m) does not fit the drawing area on A4 at it; 1:100 would
+	// sheet: scale does not fit: the scale asked for, 1:50, is too large a scale for A4: the plan spans 12.8 × 10.8 m, its stations and nozzle alone 12.0 × 9.4 m; 1:100 fits on A4 or A3 paper holds it at 1:50
 }

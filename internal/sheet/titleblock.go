@@ -20,9 +20,9 @@ func (b *builder) titleBlock(pg *Page, pages int) {
 	if !b.pr.metric() {
 		units = "feet and inches"
 	}
-	scale := fmt.Sprintf("plan 1:%d", b.model.Scale)
+	scale := "plan " + ScaleName(b.model.Scale, b.req.Units)
 	if b.model.ElevationScale > 0 {
-		scale += fmt.Sprintf(", elevation 1:%d", b.model.ElevationScale)
+		scale += ", elevation " + ScaleName(b.model.ElevationScale, b.req.Units)
 	}
 	rows := []struct {
 		h     float64
