@@ -57,3 +57,22 @@ func TestPlanSheetFlags(t *testing.T) {
 		}
 	}
 }
+
+// TestLargeSite plans the large outdoor site of issue 9 (600 × 400 m, ten
+// arcs of 200 stations, 200 obstacles): at 1:5000 it panicked in the sheet,
+// and without a scale it was refused on A3 with no way out. Every way of
+// asking now gives a sheet.
+func TestLargeSite(t *testing.T) {
+	pdf := filepath.Join(t.TempDir(), "s.pdf")
+	for _, args := range [][]string{{"--scale", "1:5000"}, {"--paper", "A1"}} {
+		a := append([]string{"plan", filepath.Join("testdata", "large-site.yaml"), "--pdf", pdf}, args...)
+		if _, errOut, code := arc(t, a...); code != exitOK {
+			t.Errorf("%v: got exit %d, want 0; stderr %q", args, code, errOut)
+		}
+	}
+	// a scale too large for the paper names the scale and the paper that fit
+	_, errOut, code := arc(t, "plan", filepath.Join("testdata", "large-site.yaml"), "--pdf", pdf, "--paper", "A4", "--scale", "1:500")
+	if code != exitError || !strings.Contains(errOut, "fits on A4") || !strings.Contains(errOut, "A1 paper holds it at 1:500") {
+		t.Errorf("got exit %d, stderr %q; want exit 1 naming the scale and the paper that fit", code, errOut)
+	}
+}
