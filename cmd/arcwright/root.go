@@ -127,6 +127,7 @@ codes and licensed practice.`,
 	root.SetVersionTemplate("arcwright {{.Version}}\n")
 	root.AddCommand(
 		newPlumeCommand(stdout),
+		newNoiseCommand(stdout),
 		newAirCommand(stdout),
 		newValidateCommand(stdout),
 		newInitCommand(stdout),

@@ -95,3 +95,28 @@ func ExampleSourceOffset() {
 	// Output:
 	// 1 kHz source at 7.9 D, 11.8 D long; true distance 93.2 D at 32.4°, error +0.61 dB
 }
+
+// The noise of an unheated Mach 0.9 jet from a 50.8 mm nozzle at 100
+// diameters, at the sideline and near the aft peak, in a free field.
+func ExampleNoiseSource() {
+	air := acoustics.Atmosphere{Temperature: 288.15, RelativeHumidity: 70, Pressure: 101325}
+	tj := 288.15 / (1 + 0.2*0.9*0.9) // static temperature of the fully expanded jet, K
+	j := acoustics.Jet{Velocity: 0.9 * math.Sqrt(1.4*287.05*tj), Density: 101325 / (287.05 * tj), Diameter: 0.0508,
+		TotalTemperature: 288.15, Mach: 0.9, DesignMach: 1, ShockFree: true}
+	src, err := acoustics.NewNoiseSource(j, air, acoustics.NoiseBands(j))
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, deg := range []float64{90, 30} {
+		l, err := src.At(acoustics.Path{Distance: 5.08, Polar: deg * math.Pi / 180}, nil)
+		if err != nil {
+			fmt.Println(err)
+			return
+		}
+		fmt.Printf("%2.0f°: OASPL %.0f ± %.0f dB, %.0f dB(A), peak %.0f dB(C)\n", deg, l.OASPL, l.Uncertainty, l.AWeighted, l.Peak)
+	}
+	// Output:
+	// 90°: OASPL 92 ± 3 dB, 91 dB(A), peak 102 dB(C)
+	// 30°: OASPL 102 ± 3 dB, 102 dB(A), peak 114 dB(C)
+}

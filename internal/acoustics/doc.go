@@ -1,8 +1,10 @@
 // Package acoustics computes the acoustics a microphone-station planner needs:
 // atmospheric absorption of sound (ISO 9613-1:1993), one-third-octave band
 // tables, wavelengths and far-field criteria, floor-reflection interference,
-// the error of assuming a nozzle-centred source, and a rough level estimate
-// for choosing microphones. It knows nothing about rooms or files.
+// the error of assuming a nozzle-centred source, jet-noise levels at a
+// receiver (mixing and shock-associated noise, frequency weightings), the
+// microphone fit and occupational noise limits. It knows nothing about
+// rooms or files.
 //
 // # Units
 //
@@ -61,5 +63,35 @@
 // practice. [EstimateLevel] is a Lighthill-scaling estimate (±5 dB) meant
 // only for choosing a microphone range, and [MicrophoneAdvice] turns it into
 // a suggested nominal microphone size from a typical-values table that the
-// user should check against data sheets.
+// user should check against data sheets. [Microphone.LevelMargin] and
+// [SmallestFit] compare a predicted level with a named microphone.
+//
+// # Jet-noise levels
+//
+// [NoiseSource] predicts the noise of one jet ([Jet], the fully expanded
+// state) in one atmosphere, by the method named in [NoiseMethod]: the SAE
+// ARP 876 single-stream procedure (Zorumski 1982, §8.4) gives the mixing
+// noise's sound power and directivity ([MixingPower], [MixingDirectivity]);
+// its spectrum follows the similarity spectra of Tam, Golebiowski & Seiner
+// (1996) ([LargeScaleSpectrum] aft, [FineScaleSpectrum] at the sideline);
+// imperfectly expanded jets add broadband shock-associated noise
+// (β = √|Mj² − Md²|, Harper-Bourne & Fisher 1973, in the ARP 876 form).
+// [NoiseSource.At] propagates it along a [Path]: spherical spreading from
+// the source position, ISO 9613-1 absorption per band, the floor image over
+// a hard floor (the band average of the coherent sum: +6 dB flush, tending
+// to the energy sum's +3 dB), and the reverberant field 4·ρ0·c0·W/R of a
+// hard-walled room ([RoomConstant], Sabine's [SabineAbsorption]). It gives
+// OASPL, the A- and C-weighted levels of IEC 61672-1 ([AWeighting],
+// [CWeighting]) and a C-weighted peak estimate (the C level plus a crest
+// factor of 12 dB for subsonic jets, 15 dB otherwise), with a stated
+// uncertainty: ±3 dB on OASPL inside the tables' range, wider near the jet
+// axis, for shock-containing jets and outside the tables.
+//
+// # Noise exposure
+//
+// [ClassifyExposure] grades a daily exposure and a peak against the action
+// and limit values of EU Directive 2003/10/EC; [NIOSHAllowedHours] gives the
+// allowed time under the NIOSH REL (85 dB(A), 3-dB exchange). They inform
+// planning only: hearing protection and exclusion zones follow the
+// facility's procedures, local codes and licensed practice.
 package acoustics

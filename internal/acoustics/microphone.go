@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"strconv"
+	"strings"
 )
 
 // CrestAllowance is the margin in dB by which a microphone's maximum sound
@@ -117,4 +118,65 @@ func frequencyWords(f float64) string {
 		return strconv.FormatFloat(f/1e3, 'g', 3, 64) + " kHz"
 	}
 	return strconv.FormatFloat(f, 'g', 3, 64) + " Hz"
+}
+
+// Microphone is the microphone a station uses: its nominal size and the
+// limits that matter for the level check. The layout names one on an
+// array or stand; limits it leaves out come from [MicrophoneClasses] at the
+// cautious end of the typical range.
+type Microphone struct {
+	// Name is the nominal size ("1/4 in") or the user's label.
+	Name string
+	// Diameter is the diaphragm diameter, m; 0 if unknown.
+	Diameter float64
+	// MaxLevel is the upper level limit, dB re 20 µPa.
+	MaxLevel float64
+	// UpperFrequency is the upper frequency limit, Hz.
+	UpperFrequency float64
+}
+
+// MicrophoneClassNamed returns the class of [MicrophoneClasses] whose
+// nominal size is name, written "1/4 in", "1/4in", "1/4\"" or "1/4 inch"
+// (and "1 in" or "1/2 in" likewise).
+func MicrophoneClassNamed(name string) (MicrophoneClass, bool) {
+	n := strings.ToLower(strings.TrimSpace(name))
+	for _, suf := range []string{"inches", "inch", "in", "\"", "″"} {
+		if strings.HasSuffix(n, suf) {
+			n = strings.TrimSpace(strings.TrimSuffix(n, suf))
+			break
+		}
+	}
+	for _, c := range MicrophoneClasses() {
+		if strings.TrimSuffix(c.Name, " in") == n {
+			return c, true
+		}
+	}
+	return MicrophoneClass{}, false
+}
+
+// Typical returns the microphone of class c at the cautious end of its
+// typical ranges: the lower upper-frequency and maximum-level limits.
+func (c MicrophoneClass) Typical() Microphone {
+	return Microphone{Name: c.Name, Diameter: c.Diameter, MaxLevel: c.MaxLevelLow, UpperFrequency: c.UpperFrequencyLow}
+}
+
+// LevelMargin returns how far, in dB, the microphone's upper level limit
+// lies above a predicted overall level oaspl (dB) plus [CrestAllowance]:
+// negative when the microphone is expected to overload.
+func (m Microphone) LevelMargin(oaspl float64) float64 {
+	return m.MaxLevel - (oaspl + CrestAllowance)
+}
+
+// SmallestFit returns the class of [MicrophoneClasses], in their order from
+// the largest diaphragm (least self-noise) down, that first fits a
+// predicted overall level oaspl (dB) with [CrestAllowance] and a highest
+// frequency fMax (Hz) at the cautious end of its typical ranges, that is
+// the least small size that fits; ok is false when none does.
+func SmallestFit(oaspl, fMax float64) (c MicrophoneClass, ok bool) {
+	for _, c := range MicrophoneClasses() {
+		if c.UpperFrequencyLow >= fMax && c.MaxLevelLow >= oaspl+CrestAllowance {
+			return c, true
+		}
+	}
+	return MicrophoneClass{}, false
 }

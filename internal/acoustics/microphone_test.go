@@ -84,3 +84,44 @@ func TestMicrophoneClassesOrdered(t *testing.T) {
 		}
 	}
 }
+
+func TestMicrophoneFit(t *testing.T) {
+	// Typical limits from acoustics.md §5.1 (FROM MEMORY, medium): the
+	// cautious end of each range; a 1/4 in microphone is good to 160 dB and
+	// 70 kHz, so 140 dB OASPL + 15 dB crest fits it with 5 dB to spare
+	// (hand-computed).
+	c, ok := MicrophoneClassNamed("1/4\"")
+	if !ok || c.Name != "1/4 in" {
+		t.Fatalf("got %v %v, want the 1/4 in class", c, ok)
+	}
+	for _, n := range []string{"1/2 in", "1/2in", "1/2 inch", " 1 in"} {
+		if _, ok := MicrophoneClassNamed(n); !ok {
+			t.Errorf("%q: not recognised", n)
+		}
+	}
+	if _, ok := MicrophoneClassNamed("3/8 in"); ok {
+		t.Error("3/8 in: recognised, want not")
+	}
+	m := c.Typical()
+	if got := m.LevelMargin(140); got != 5 {
+		t.Errorf("got margin %g dB, want 5", got)
+	}
+	tests := []struct {
+		oaspl, fmax float64
+		want        string
+		ok          bool
+	}{
+		{110, 5e3, "1 in", true},
+		{110, 10e3, "1/2 in", true}, // 1 in reaches only 8 kHz at the cautious end
+		{125, 10e3, "1/2 in", true},
+		{130, 10e3, "1/4 in", true}, // 1/2 in: 140 dB < 130 + 15
+		{150, 10e3, "1/8 in", true},
+		{170, 10e3, "", false},
+	}
+	for _, tt := range tests {
+		c, ok := SmallestFit(tt.oaspl, tt.fmax)
+		if ok != tt.ok || c.Name != tt.want {
+			t.Errorf("%g dB, %g Hz: got %q %v, want %q %v", tt.oaspl, tt.fmax, c.Name, ok, tt.want, tt.ok)
+		}
+	}
+}

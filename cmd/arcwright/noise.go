@@ -1,0 +1,198 @@
+package main
+
+import (
+	"errors"
+	"fmt"
+	"io"
+	"math"
+	"strconv"
+
+	"github.com/spf13/cobra"
+	"github.com/spf13/pflag"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/export"
+	"arcwright/internal/jet"
+	"arcwright/internal/layout"
+	"arcwright/internal/planner"
+	"arcwright/internal/units"
+)
+
+// NoiseOptions are the noise command's inputs: the plume command's jet
+// flags plus the receiver and the air.
+type NoiseOptions struct {
+	PlumeOptions
+	Distance, Polar, Humidity float64
+}
+
+// AddFlags binds the options to fs.
+func (o *NoiseOptions) AddFlags(fs *pflag.FlagSet) {
+	jetFlags := pflag.NewFlagSet("jet", pflag.ContinueOnError)
+	o.PlumeOptions.AddFlags(jetFlags)
+	jetFlags.VisitAll(func(f *pflag.Flag) {
+		switch f.Name {
+		case "at", "format", "velocity-limit", "temperature-limit":
+			return // the profile table, its formats and the zone limits are the plume command's
+		}
+		fs.AddFlag(f)
+	})
+	dist := newQuantity(units.Length, "", &o.Distance, "")
+	dist.doubt = doubtful(0, 2000, "m")
+	fs.Var(dist, "distance", "distance of the receiver from the centre of the nozzle exit, e.g. 5.08m or 150ft")
+	fs.Var(newQuantity(units.Angle, "deg", &o.Polar, "90deg"), "polar", "polar angle of the receiver from the downstream jet axis, e.g. 30deg (a bare number is in degrees)")
+	hum := newQuantity(units.Fraction, "%", &o.Humidity, "70%")
+	fs.Var(&percentFlag{hum}, "humidity", "relative humidity of the air in percent, e.g. 70% (without a layout)")
+	formatFlag(fs, &o.Format, "text", "json")
+}
+
+func newNoiseCommand(stdout io.Writer) *cobra.Command {
+	o := &NoiseOptions{}
+	c := &cobra.Command{
+		Use:   "noise",
+		Short: "Predict the jet-noise levels at one distance and angle",
+		Long: `Predict the noise of one jet at one receiver: the 1/3-octave spectrum at the
+exact base-ten band centres, the OASPL, the A-weighted level (IEC 61672-1) and
+an estimate of the C-weighted peak, with the stated uncertainty.
+
+The method is the SAE ARP 876 single-stream procedure for the mixing noise
+(sound power, density exponent, directivity), spread over the similarity
+spectra of Tam, Golebiowski & Seiner (1996), plus shock-associated noise after
+Harper-Bourne & Fisher (1973) in the ARP 876 form for imperfectly expanded
+jets. The sound spreads spherically from the end of the potential core, the
+source position the planner uses, with ISO 9613-1 air absorption; this command
+assumes a free field (the plan adds the floor and the room). Expect about
+±3 dB on OASPL inside the tables' range, more near the jet axis, for
+shock-containing jets and outside the tables.
+
+Give the jet as for 'arcwright plume' (flags, or --layout and --point) and the
+receiver with --distance and --polar.
+
+Examples:
+  arcwright noise --diameter 50.8mm --npr 1.69 --temperature-ratio 1 --distance 5.08m --polar 30deg
+  arcwright noise --layout layouts/outdoor-static-pad.yaml --point takeoff --distance 150ft --polar 40 --format json
+
+The levels are estimates. Hearing protection and exclusion zones follow the
+facility's procedures, local codes and licensed practice.
+
+Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
+		Args: noArgs,
+		RunE: func(cmd *cobra.Command, args []string) error {
+			return runNoise(o, cmd.Flags(), stdout)
+		},
+	}
+	o.AddFlags(c.Flags())
+	return c
+}
+
+// noiseCaution is printed under every text prediction.
+const noiseCaution = "The levels are estimates with the stated uncertainty. Hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice."
+
+func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
+	if !fs.Changed("distance") {
+		return usageError{errors.New("--distance is required: the receiver's distance from the nozzle exit, e.g. --distance 5.08m")}
+	}
+	if o.Layout != "" && fs.Changed("humidity") {
+		return usageError{errors.New("--humidity would be ignored: with --layout the air comes from the layout")}
+	}
+	if !(o.Distance > 0) || math.IsInf(o.Distance, 0) {
+		return fmt.Errorf("--distance: want a distance above 0, got %s", units.FormatLength(o.Distance, units.Metric))
+	}
+	if !(o.Polar >= 0 && o.Polar <= math.Pi) {
+		return fmt.Errorf("--polar: want 0–180° from the downstream jet axis, got %s", units.FormatAngleDeg(o.Polar))
+	}
+	n, c, lim, sys, err := plumeInputs(&o.PlumeOptions, fs)
+	if err != nil {
+		return err
+	}
+	if o.Units == "imperial" {
+		sys = units.Imperial
+	} else if o.Units == "metric" {
+		sys = units.Metric
+	}
+	atm := acoustics.Atmosphere{Temperature: c.Ambient.Temperature, RelativeHumidity: 100 * o.Humidity, Pressure: c.Ambient.Pressure}
+	if o.Layout != "" {
+		req, _, err := layout.Load(o.Layout)
+		if err != nil {
+			return err
+		}
+		atm.RelativeHumidity = req.Ambient.Humidity
+	}
+	if err := atm.Validate(); err != nil {
+		return fmt.Errorf("air: %w", err)
+	}
+	p, err := jet.NewPlume(n, c, lim)
+	if err != nil {
+		var ie *jet.InputError
+		if o.Layout == "" && errors.As(err, &ie) {
+			if f, ok := flagOf[ie.Field]; ok {
+				return fmt.Errorf("%s: %s %s", f, ie.Field, ie.Reason)
+			}
+		}
+		return err
+	}
+	nj := planner.NoiseJet(p.Exit())
+	src, err := acoustics.NewNoiseSource(nj, atm, acoustics.NoiseBands(nj))
+	if err != nil {
+		return err
+	}
+	xs := p.CoreLength(jet.Nominal)
+	r, th, _ := acoustics.SourceOffset(o.Distance, o.Polar, xs)
+	if !(r > 0) {
+		return fmt.Errorf("--distance %s at --polar %s puts the receiver on the source (the end of the potential core, %s downstream)",
+			units.FormatLength(o.Distance, sys), units.FormatAngleDeg(o.Polar), units.FormatLength(xs, sys))
+	}
+	th = math.Abs(th)
+	bands := src.Bands()
+	levels := make([]float64, len(bands))
+	l, err := src.At(acoustics.Path{Distance: r, Polar: th}, levels)
+	if err != nil {
+		return err
+	}
+	if o.Format == "json" {
+		return export.NoiseJSON(w, l, bands, levels)
+	}
+	return noiseText(w, src, p, l, levels, r, th, o, atm, sys)
+}
+
+func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustics.Levels, levels []float64, r, th float64, o *NoiseOptions, atm acoustics.Atmosphere, sys units.System) error {
+	e := p.Exit()
+	L := func(m float64) string { return units.FormatLength(m, sys) }
+	fmt.Fprintf(w, "%s nozzle, D %s, Uj %s (Uj/c0 %.2f), Tt %s; air %s, %.0f %% RH, %s\n",
+		p.Nozzle().Kind, L(e.Diameter), units.FormatVelocity(e.Velocity, sys), e.Velocity/atm.SpeedOfSound(),
+		units.FormatTemperature(e.TotalTemperature, sys), units.FormatTemperature(atm.Temperature, sys), atm.RelativeHumidity, units.FormatPressure(atm.Pressure, sys))
+	fmt.Fprintf(w, "Receiver %s from the nozzle exit at %s from the downstream jet axis;\n", L(o.Distance), units.FormatAngleDeg(o.Polar))
+	fmt.Fprintf(w, "  %s from the source at the end of the potential core (%s downstream), at %s.\n\n", L(r), L(p.CoreLength(jet.Nominal)), units.FormatAngleDeg(th))
+	total, mixing := src.SoundPower()
+	tw := newTable(w, 0)
+	fmt.Fprintf(tw, "OASPL\t%.1f dB\t± %.0f dB\n", l.OASPL, l.Uncertainty)
+	fmt.Fprintf(tw, "A-weighted\t%.1f dB(A)\tIEC 61672-1\n", l.AWeighted)
+	fmt.Fprintf(tw, "C-weighted peak\t%.1f dB(C)\testimate: C-weighted level %.1f dB + %.0f dB crest factor\n", l.Peak, l.CWeighted, src.CrestFactor())
+	fmt.Fprintf(tw, "Sound power\t%.1f dB re 1 pW\tmixing noise %.1f dB\n", 10*math.Log10(total/acoustics.ReferenceSoundPower), 10*math.Log10(mixing/acoustics.ReferenceSoundPower))
+	tw.Flush()
+	fmt.Fprintf(w, "\nMethod: %s.\n", acoustics.NoiseMethod)
+	fmt.Fprintln(w, "\n1/3-octave spectrum (free field, with air absorption)")
+	tw = newTable(w, 0)
+	fmt.Fprintln(tw, "  band\tcentre, Hz\tdB\tdB(A)\t")
+	bands := src.Bands()
+	loudest := math.Inf(-1)
+	for _, v := range levels {
+		loudest = math.Max(loudest, v)
+	}
+	fTop := 0.0
+	for i, b := range bands {
+		if levels[i] >= loudest-20 {
+			fTop = b.Upper
+		}
+		fmt.Fprintf(tw, "  %s\t%s\t%.1f\t%.1f\t\n", b.Nominal, strconv.FormatFloat(b.Centre, 'g', 6, 64), levels[i], levels[i]+acoustics.AWeighting(b.Centre))
+	}
+	tw.Flush()
+	fmt.Fprintln(w, "\nMicrophone: "+acoustics.MicrophoneAdvice(l.OASPL, fTop))
+	if notes := src.Notes(); len(notes) > 0 {
+		fmt.Fprintln(w, "\nNotes")
+		for _, n := range notes {
+			fmt.Fprintln(w, "  - "+n)
+		}
+	}
+	fmt.Fprintln(w, "\n"+noiseCaution)
+	return nil
+}

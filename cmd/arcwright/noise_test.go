@@ -1,0 +1,94 @@
+package main
+
+import (
+	"encoding/json"
+	"math"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+func TestNoiseJSONContract(t *testing.T) {
+	out, errOut, code := arc(t, "noise", "--diameter", "50.8mm", "--npr", "1.69", "--temperature-ratio", "1",
+		"--distance", "5.08m", "--polar", "30deg", "--format", "json")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	var doc map[string]json.RawMessage
+	if err := json.Unmarshal([]byte(out), &doc); err != nil {
+		t.Fatal(err)
+	}
+	want := []string{"oaspl_db", "a_weighted_db", "peak_db", "uncertainty_db", "method", "spectrum"}
+	if len(doc) != len(want) {
+		t.Errorf("got %d keys, want exactly %v", len(doc), want)
+	}
+	for _, k := range want {
+		if _, ok := doc[k]; !ok {
+			t.Errorf("missing key %q", k)
+		}
+	}
+	var spec []struct {
+		F  float64 `json:"frequency_hz"`
+		DB float64 `json:"db"`
+	}
+	if err := json.Unmarshal(doc["spectrum"], &spec); err != nil || len(spec) < 10 {
+		t.Fatalf("spectrum: %v, %d bands", err, len(spec))
+	}
+	for _, b := range spec {
+		// exact base-ten midbands 10^(n/10) Hz (IEC 61260-1, acoustics.md §1.3)
+		n := math.Round(10 * math.Log10(b.F))
+		if want := math.Pow(10, n/10); math.Abs(b.F-want) > 1e-9*want {
+			t.Errorf("band %g Hz is not the exact midband %g Hz", b.F, want)
+		}
+	}
+	var m string
+	if err := json.Unmarshal(doc["method"], &m); err != nil || !strings.Contains(m, "ARP 876") || !strings.Contains(m, "Tam") {
+		t.Errorf("method %q does not name ARP 876 and Tam", m)
+	}
+	var oaspl, unc float64
+	_ = json.Unmarshal(doc["oaspl_db"], &oaspl)
+	_ = json.Unmarshal(doc["uncertainty_db"], &unc)
+	// cold Mj 0.9, 50.8 mm, about 100 D at the aft peak: ≈ 102 dB
+	// (noise-and-exposure.md §1, DERIVED from the ARP 876 tables), less the
+	// air absorption of the model-scale band; the ±3 dB stated accuracy
+	if math.Abs(oaspl-102) > 3 || unc != 3 {
+		t.Errorf("got OASPL %.1f ± %g dB, want about 102 ± 3", oaspl, unc)
+	}
+}
+
+func TestNoiseText(t *testing.T) {
+	out, errOut, code := arc(t, "noise", "--layout", filepath.Join(demoDir, "anechoic-model-jet.yaml"), "--point", "CU-136", "--distance", "3m", "--polar", "90")
+	if code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	for _, want := range []string{"OASPL", "dB(A)", "crest factor", "ARP 876", "shock-containing jet", "facility's procedures", "Microphone:"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+}
+
+func TestNoiseErrors(t *testing.T) {
+	jetFlags := []string{"noise", "--diameter", "50.8mm", "--npr", "1.69", "--temperature-ratio", "1"}
+	tests := []struct {
+		name string
+		args []string
+		code int
+		want string
+	}{
+		{"no distance", jetFlags, exitUsage, "--distance is required"},
+		{"negative distance", append(append([]string{}, jetFlags...), "--distance", "-1m"), exitError, "--distance"},
+		{"polar beyond 180", append(append([]string{}, jetFlags...), "--distance", "5m", "--polar", "200deg"), exitError, "--polar"},
+		{"humidity with a layout", []string{"noise", "--layout", filepath.Join(demoDir, "anechoic-model-jet.yaml"), "--point", "CS-060", "--distance", "3m", "--humidity", "50%"}, exitUsage, "--humidity"},
+		{"humidity out of range", append(append([]string{}, jetFlags...), "--distance", "5m", "--humidity", "150%"), exitError, "RelativeHumidity"},
+		{"plume's table flag", append(append([]string{}, jetFlags...), "--distance", "5m", "--at", "1m"), exitUsage, "unknown flag"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			_, errOut, code := arc(t, tt.args...)
+			if code != tt.code || !strings.Contains(errOut, tt.want) {
+				t.Errorf("got exit %d, %q; want exit %d mentioning %q", code, errOut, tt.code, tt.want)
+			}
+		})
+	}
+}
