@@ -1,6 +1,8 @@
 package main
 
 import (
+	"os"
+	"path/filepath"
 	"regexp"
 	"strings"
 	"testing"
@@ -75,5 +77,36 @@ func TestPlumeHelpExample(t *testing.T) {
 	args := append([]string{"plume"}, strings.Fields(strings.ReplaceAll(m[1], "layouts/", demoDir+"/"))...)
 	if _, errOut, code := arc(t, args...); code != exitOK {
 		t.Errorf("%v: got exit %d, stderr %q, want 0", args, code, errOut)
+	}
+}
+
+// TestNonRegularInputs checks that devices given as the layout or the
+// as-built file are refused at once with exit status 1 (issue 10, item 5:
+// these read about 1 GB/s until killed).
+func TestNonRegularInputs(t *testing.T) {
+	layoutPath := demoDir + "/anechoic-model-jet.yaml"
+	for _, args := range [][]string{
+		{"validate", "/dev/zero"},
+		{"plan", "/dev/zero"},
+		{"check", layoutPath, "--as-built", "/dev/zero"},
+		{"plume", "--layout", "/dev/zero", "--point", "x"},
+	} {
+		_, errOut, code := arc(t, args...)
+		if code != exitError || !strings.Contains(errOut, "/dev/zero: is not a regular file (a device)") {
+			t.Errorf("%v: got exit %d, stderr %q, want exit 1 and a clear error", args, code, errOut)
+		}
+	}
+}
+
+// TestUnknownAsBuiltLines checks that check --as-built names each unknown
+// station at its line of the as-built file (issue 10, item 8).
+func TestUnknownAsBuiltLines(t *testing.T) {
+	path := filepath.Join(t.TempDir(), "built.csv")
+	if err := os.WriteFile(path, []byte("id;x;y;z\nA-01;6,2;4,1;1,2\nA-1;6;4;1\n"), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	_, errOut, code := arc(t, "check", demoDir+"/anechoic-model-jet.yaml", "--as-built", path)
+	if code != exitError || !strings.Contains(errOut, path+`:3: id: no station "A-1" in the plan; did you mean "A-01"?`) {
+		t.Errorf("got exit %d, stderr %q, want exit 1 and the unknown ID at line 3", code, errOut)
 	}
 }

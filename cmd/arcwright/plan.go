@@ -122,6 +122,17 @@ func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error)
 	}
 	p, err := planner.New(req)
 	if errors.Is(err, planner.ErrAsBuilt) {
+		// plan without the as-built file to name each unknown ID at its line
+		req.AsBuilt = nil
+		if q, qerr := planner.New(req); qerr == nil {
+			ids := make([]string, len(q.Stations))
+			for i, s := range q.Stations {
+				ids[i] = s.ID
+			}
+			if lerr := layout.UnknownAsBuilt(asBuilt, ids); lerr != nil {
+				return nil, lerr
+			}
+		}
 		return nil, fmt.Errorf("%s: %w", asBuilt, err)
 	}
 	if err != nil {

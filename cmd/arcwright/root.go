@@ -49,7 +49,8 @@ func run(args []string, stdout, stderr io.Writer) int {
 		for _, e := range le {
 			fmt.Fprintln(stderr, e)
 		}
-		fmt.Fprintf(stderr, "arcwright: %d %s found; fix %s and run again\n", len(le), plural(len(le), "problem", "problems"), plural(len(le), "it", "them"))
+		n := le.Total()
+		fmt.Fprintf(stderr, "arcwright: %d %s found; fix %s and run again\n", n, plural(n, "problem", "problems"), plural(n, "it", "them"))
 		return exitError
 	}
 	fmt.Fprintln(stderr, "arcwright: "+err.Error())

@@ -6,9 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"io/fs"
 	"math"
-	"os"
 	"strings"
 
 	"github.com/paulmach/orb"
@@ -33,17 +31,13 @@ var (
 // CSV file at path, for planner.Request.AsBuilt; see [DecodeAsBuilt] for
 // the format. req is the request decoded from the layout: a bare number is
 // read in the layout's length unit (req.LengthUnit), and heights are
-// checked against the cell's ceiling. A file that cannot be read gives an Errors value of one problem
-// wrapping [ErrRead].
+// checked against the cell's ceiling. A file that cannot be read, is not a
+// regular file or is larger than [MaxInputSize] gives an Errors value of
+// one problem wrapping [ErrRead].
 func LoadAsBuilt(path string, req *planner.Request) (map[string]planner.Placement, error) {
-	data, err := os.ReadFile(path)
+	data, err := readInput(path)
 	if err != nil {
-		msg := err.Error()
-		var pe *fs.PathError
-		if errors.As(err, &pe) {
-			msg = pe.Err.Error()
-		}
-		return nil, Errors{{File: path, Msg: "cannot read the file: " + msg, kind: ErrRead, cause: err}}
+		return nil, err
 	}
 	return DecodeAsBuilt(path, data, req.LengthUnit, req.Cell.Ceiling)
 }
@@ -52,7 +46,10 @@ func LoadAsBuilt(path string, req *planner.Request) (map[string]planner.Placemen
 // used in messages. The first row is a header naming the columns, in any
 // order: id, x, y, z (the microphone or probe tip, cell frame, z above the
 // floor) and, optionally, base_x and base_y (the stand pole in plan).
-// Lines starting with # are comments. Values take units ("1.25 m",
+// Lines starting with # are comments. A UTF-8 byte-order mark is skipped,
+// and a file whose header is separated by semicolons or tabs instead of
+// commas (as spreadsheets save it in some locales) is read with that
+// separator and decimal commas ("1,25"). Values take units ("1.25 m",
 // "4 ft 2 in"); a bare number is in the unit bare (m, mm, cm, in or ft; ""
 // means m). ceiling is the cell's ceiling height, m (+Inf for open sky).
 //
@@ -75,7 +72,7 @@ func DecodeAsBuilt(name string, data []byte, bare string, ceiling float64) (map[
 	d := &decoder{file: name, lenUnit: bare, sys: units.Metric}
 	out := d.asBuilt(data, ceiling)
 	if len(d.errs) > 0 {
-		sortErrors(d.errs)
+		d.errs = summarise(d.errs)
 		return nil, d.errs
 	}
 	return out, nil
@@ -83,7 +80,13 @@ func DecodeAsBuilt(name string, data []byte, bare string, ceiling float64) (map[
 
 // asBuilt does the work of DecodeAsBuilt.
 func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Placement {
+	if !d.checkText(data) {
+		return nil
+	}
+	data = bytes.TrimPrefix(data, utf8BOM) // spreadsheets write one
+	sep := separator(data)
 	r := csv.NewReader(bytes.NewReader(data))
+	r.Comma = sep
 	r.Comment = '#'
 	r.TrimLeadingSpace = true
 	r.FieldsPerRecord = -1 // short and long rows are reported here, with the column
@@ -134,6 +137,9 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 			if i < len(rec) {
 				v = strings.TrimSpace(rec[i])
 			}
+			if sep != ',' && !strings.Contains(v, ".") && strings.Count(v, ",") == 1 {
+				v = strings.Replace(v, ",", ".", 1) // a decimal comma, as spreadsheets write next to semicolons
+			}
 			return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!str", Value: v, Line: line}
 		}
 		id := at("id").Value
@@ -169,6 +175,29 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 		d.errorf(ErrMissing, 0, "", "the file holds no positions; want one row per station after the header")
 	}
 	return out
+}
+
+// separator returns the field separator of a CSV file: a semicolon or a
+// tab when the first line that is not a comment has one and no comma (as
+// spreadsheets write in locales with a decimal comma), else a comma.
+func separator(data []byte) rune {
+	for _, line := range bytes.Split(data, []byte("\n")) {
+		t := bytes.TrimSpace(line)
+		if len(t) == 0 || t[0] == '#' {
+			continue
+		}
+		if bytes.IndexByte(t, ',') >= 0 {
+			return ','
+		}
+		switch {
+		case bytes.IndexByte(t, ';') >= 0:
+			return ';'
+		case bytes.IndexByte(t, '\t') >= 0:
+			return '\t'
+		}
+		return ','
+	}
+	return ','
 }
 
 // asBuiltHeader maps the column names of the header row to their index.
@@ -230,4 +259,78 @@ func (d *decoder) csvError(err error) {
 		return
 	}
 	d.add(ErrSyntax, err, 0, "", "bad CSV: "+err.Error())
+}
+
+// UnknownAsBuilt reads the as-built file at path again and reports, at its
+// line, every row whose station ID is not one of ids (the stations of the
+// plan), suggesting the nearest ID; a long list is summarised like every
+// Errors value. It returns nil when every ID is known, and the reading
+// errors of [LoadAsBuilt] when the file cannot be read.
+func UnknownAsBuilt(path string, ids []string) error {
+	data, err := readInput(path)
+	if err != nil {
+		return err
+	}
+	d := &decoder{file: path, lenUnit: "m", sys: units.Metric}
+	if !d.checkText(data) {
+		return summarise(d.errs)
+	}
+	data = bytes.TrimPrefix(data, utf8BOM)
+	r := csv.NewReader(bytes.NewReader(data))
+	r.Comma = separator(data)
+	r.Comment = '#'
+	r.TrimLeadingSpace = true
+	r.FieldsPerRecord = -1
+	header, err := r.Read()
+	if err != nil {
+		d.csvError(err)
+		return summarise(d.errs)
+	}
+	col := -1
+	for i, h := range header {
+		if strings.ToLower(strings.TrimSpace(h)) == "id" {
+			col = i
+		}
+	}
+	known := make(map[string]bool, len(ids))
+	for _, id := range ids {
+		known[id] = true
+	}
+	like := "the plan has no stations"
+	if len(ids) > 0 {
+		like = "the plan's stations are named like " + ids[0]
+	}
+	for col >= 0 {
+		rec, err := r.Read()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			d.csvError(err)
+			break
+		}
+		if col >= len(rec) {
+			continue
+		}
+		id := strings.TrimSpace(rec[col])
+		if id == "" || known[id] {
+			continue
+		}
+		line, _ := r.FieldPos(col)
+		msg := fmt.Sprintf("no station %q in the plan", id)
+		if len(d.errs) >= MaxProblems { // summarised: no suggestion needed
+			d.add(ErrUnresolved, nil, line, "id", msg)
+			continue
+		}
+		if s := suggest(id, ids); s != "" {
+			msg += fmt.Sprintf("; did you mean %q?", s)
+		} else {
+			msg += " (" + like + ")"
+		}
+		d.add(ErrUnresolved, nil, line, "id", msg)
+	}
+	if len(d.errs) == 0 {
+		return nil
+	}
+	return summarise(d.errs)
 }

@@ -1,10 +1,7 @@
 package layout
 
 import (
-	"errors"
 	"fmt"
-	"io/fs"
-	"os"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
@@ -28,17 +25,14 @@ var (
 )
 
 // Load reads and validates the layout file at path; see [Decode].
-// A file that cannot be read gives an Errors value of one problem, without
-// a line, wrapping [ErrRead] and the error of the file system.
+// A file that cannot be read, that is not a regular file (a device, a
+// named pipe, a directory) or that is larger than [MaxInputSize] gives an
+// Errors value of one problem, without a line, wrapping [ErrRead] and the
+// error of the file system, if any.
 func Load(path string) (*planner.Request, []Warning, error) {
-	data, err := os.ReadFile(path)
+	data, err := readInput(path)
 	if err != nil {
-		msg := err.Error()
-		var pe *fs.PathError
-		if errors.As(err, &pe) {
-			msg = pe.Err.Error()
-		}
-		return nil, nil, Errors{{File: path, Msg: "cannot read the file: " + msg, kind: ErrRead, cause: err}}
+		return nil, nil, err
 	}
 	return Decode(path, data)
 }
@@ -59,7 +53,7 @@ func Decode(name string, data []byte) (*planner.Request, []Warning, error) {
 		req = d.request(root)
 	}
 	if len(d.errs) > 0 {
-		sortErrors(d.errs)
+		d.errs = summarise(d.errs)
 		return nil, nil, d.errs
 	}
 	sortWarnings(d.warns)

@@ -2,6 +2,7 @@ package layout
 
 import (
 	"errors"
+	"fmt"
 	"sort"
 	"strconv"
 	"strings"
@@ -45,6 +46,7 @@ type Error struct {
 
 	kind  error // one of the sentinel errors
 	cause error // the error of another package behind Msg, if any
+	more  int   // for the last line of a long list: how many problems it stands for
 }
 
 // Error returns "File:Line: Field: Msg", leaving out the parts that are empty.
@@ -85,6 +87,33 @@ func (es Errors) Unwrap() []error {
 		out[i] = e
 	}
 	return out
+}
+
+// MaxProblems is how many problems of one file are listed one by one;
+// the rest are counted in one last line.
+const MaxProblems = 50
+
+// Total returns the number of problems es stands for, counting those that
+// a long list summarises in its last line.
+func (es Errors) Total() int {
+	n := 0
+	for _, e := range es {
+		n += 1 + e.more
+	}
+	return n
+}
+
+// summarise sorts es and keeps its first MaxProblems problems, replacing
+// the rest with one line that counts them and has no line of its own.
+func summarise(es Errors) Errors {
+	sortErrors(es)
+	if len(es) <= MaxProblems {
+		return es
+	}
+	rest := es[MaxProblems:]
+	last := &Error{File: es[0].File, Msg: fmt.Sprintf("… and %d more problems after line %d (fix the ones above and run again)", len(rest), es[MaxProblems-1].Line),
+		kind: rest[0].kind, more: len(rest) - 1}
+	return append(es[:MaxProblems:MaxProblems], last)
 }
 
 // sortErrors orders es by line, then by field; problems at the same line and

@@ -63,6 +63,9 @@ const noLayout = "the file holds no layout (`arcwright init` writes a starter)"
 // parse reads data as one YAML document and returns its root node, or nil
 // after recording why there is none.
 func (d *decoder) parse(data []byte) *yaml.Node {
+	if !d.checkText(data) {
+		return nil
+	}
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
@@ -92,6 +95,9 @@ func (d *decoder) parse(data []byte) *yaml.Node {
 	}
 	if root.Kind == yaml.DocumentNode || isNull(root) {
 		d.errorf(ErrSyntax, 0, "", noLayout)
+		return nil
+	}
+	if !d.checkDepth(root, 1) {
 		return nil
 	}
 	return root
