@@ -24,7 +24,9 @@ array of each kind (an arc with an automatic radius, a sideline, a near-field
 line, a ring, single points and a probe stand). Every key is explained in its
 comment; edit it for your cell and test, then run 'arcwright validate FILE'.
 
-An existing file is not overwritten unless --force is given.
+An existing file is not overwritten unless --force is given (it then keeps
+its permissions); a symbolic link is kept and its target written. FILE "-"
+writes the starter to standard output.
 
 Exit status: 0 on success, 1 if the file exists or cannot be written, 2 on a
 bad command line.`,
@@ -34,19 +36,24 @@ bad command line.`,
 			if len(args) == 1 {
 				path = args[0]
 			}
-			if _, err := os.Stat(path); err == nil && !force {
+			if fi, err := os.Stat(path); err == nil && fi.Mode().IsRegular() && !force {
 				return fmt.Errorf("%s already exists; use --force to overwrite it", path)
 			} else if err != nil && !errors.Is(err, fs.ErrNotExist) {
 				return err
 			}
-			err := export.WriteFile(path, func(w io.Writer) error {
+			out := export.Output{Label: "init", Path: path, Write: func(w io.Writer) error {
 				_, err := w.Write(layout.Starter())
 				return err
-			})
-			if err != nil {
+			}}
+			if err := checkOutputs([]export.Output{out}, nil); err != nil {
 				return err
 			}
-			fmt.Fprintf(stdout, "wrote %s: edit it, then run 'arcwright validate %s'\n", path, path)
+			if err := export.WriteFiles([]export.Output{out}, nil, stdout); err != nil {
+				return err
+			}
+			if path != export.Stdout {
+				fmt.Fprintf(stdout, "wrote %s: edit it, then run 'arcwright validate %s'\n", path, path)
+			}
 			return nil
 		},
 	}

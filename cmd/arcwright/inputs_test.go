@@ -110,3 +110,112 @@ func TestUnknownAsBuiltLines(t *testing.T) {
 		t.Errorf("got exit %d, stderr %q, want exit 1 and the unknown ID at line 3", code, errOut)
 	}
 }
+
+// copyDemo copies the anechoic demo into dir and returns its path.
+func copyDemo(t *testing.T, dir string) string {
+	t.Helper()
+	data, err := os.ReadFile(demoDir + "/anechoic-model-jet.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	path := filepath.Join(dir, "L.yaml")
+	if err := os.WriteFile(path, data, 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return path
+}
+
+// names lists dir.
+func names(t *testing.T, dir string) []string {
+	t.Helper()
+	es, err := os.ReadDir(dir)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out []string
+	for _, e := range es {
+		out = append(out, e.Name())
+	}
+	return out
+}
+
+// TestPlanOutputs checks the destinations of plan: never an input or
+// another output (exit 2), all or none, checked before planning, the mode
+// of a replaced file kept, "-" for standard output (issue 10, items 2–4).
+func TestPlanOutputs(t *testing.T) {
+	dir := t.TempDir()
+	layoutPath := copyDemo(t, dir)
+	before, _ := os.ReadFile(layoutPath)
+	same := filepath.Join(dir, "same.out")
+	for _, tt := range []struct {
+		name string
+		args []string
+		code int
+		want string
+	}{
+		{"onto the layout", []string{"--csv", layoutPath}, exitUsage, "--csv " + layoutPath + " is the layout"},
+		{"onto the layout by a link", []string{"--csv", filepath.Join(dir, "link.yaml")}, exitUsage, "is the layout"},
+		{"two outputs, one file", []string{"--pdf", same, "--csv", same}, exitUsage, "are the same file"},
+		{"missing directory", []string{"--pdf", filepath.Join(dir, "ok.pdf"), "--csv", "/nonexistent/x.csv"}, exitError, "--csv /nonexistent/x.csv: cannot write in its directory"},
+		{"a device", []string{"--pdf", "/dev/zero"}, exitUsage, "is a device"},
+		{"a directory", []string{"--json", dir}, exitUsage, "is a directory"},
+		{"stdout twice", []string{"--csv", "-", "--json", "-"}, exitUsage, "the same file"},
+		{"stdout and --format json", []string{"--csv", "-", "--format", "json"}, exitUsage, "choose one"},
+	} {
+		t.Run(tt.name, func(t *testing.T) {
+			_ = os.Symlink("L.yaml", filepath.Join(dir, "link.yaml"))
+			out, errOut, code := arc(t, append([]string{"plan", layoutPath}, tt.args...)...)
+			if code != tt.code || !strings.Contains(errOut, tt.want) {
+				t.Errorf("got exit %d, stderr %q, want exit %d and %q", code, errOut, tt.code, tt.want)
+			}
+			if out != "" {
+				t.Errorf("got output %q, want none: checked before planning", out)
+			}
+			if got, _ := os.ReadFile(layoutPath); string(got) != string(before) {
+				t.Errorf("the layout was overwritten")
+			}
+			if n := names(t, dir); len(n) != 2 {
+				t.Errorf("directory: got %v, want only L.yaml and link.yaml", n)
+			}
+		})
+	}
+
+	// a replaced file keeps its mode
+	csvPath := filepath.Join(dir, "stations.csv")
+	if err := os.WriteFile(csvPath, []byte("old"), 0o600); err != nil {
+		t.Fatal(err)
+	}
+	if _, errOut, code := arc(t, "plan", layoutPath, "--csv", csvPath); code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	if fi, err := os.Stat(csvPath); err != nil || fi.Mode().Perm() != 0o600 {
+		t.Errorf("mode: got %v, %v, want -rw-------", fi.Mode().Perm(), err)
+	}
+	// "-" writes the export on standard output, without the summary
+	out, _, code := arc(t, "plan", layoutPath, "--csv", "-")
+	if code != exitOK || !strings.HasPrefix(out, "id,channel,") || strings.Contains(out, "stations —") {
+		t.Errorf("--csv -: exit %d, output starts %.60q, want the CSV alone", code, out)
+	}
+}
+
+// TestInitDanglingLink checks that init over a dangling symbolic link
+// writes the link's target and keeps the link (issue 10, item 4).
+func TestInitDanglingLink(t *testing.T) {
+	dir := t.TempDir()
+	link := filepath.Join(dir, "layout.yaml")
+	if err := os.Symlink("real.yaml", link); err != nil {
+		t.Fatal(err)
+	}
+	if _, errOut, code := arc(t, "init", link); code != exitOK {
+		t.Fatalf("exit %d: %s", code, errOut)
+	}
+	if fi, err := os.Lstat(link); err != nil || fi.Mode()&os.ModeSymlink == 0 {
+		t.Errorf("the link was replaced by a file")
+	}
+	if _, err := os.Stat(filepath.Join(dir, "real.yaml")); err != nil {
+		t.Errorf("the link's target was not written: %v", err)
+	}
+	if _, _, code := arc(t, "init", "/dev/zero"); code != exitUsage {
+		t.Errorf("init /dev/zero: got exit %d, want %d", code, exitUsage)
+	}
+}

@@ -1,7 +1,6 @@
 package main
 
 import (
-	"bytes"
 	"errors"
 	"fmt"
 	"io"
@@ -50,6 +49,7 @@ sight to the source region, far field, floor reflection, air absorption,
 entrained inflow, buoyant plumes), and print a summary: stations ok, warned and
 blocked, the governing operating point, automatic radii, and what blocks what.
 
+<<<<<<< HEAD
 --pdf writes the floor layout sheet; --paper and --scale choose its paper and
 the plan's scale (ISO 5455 scales 1:1 to 1:5000 with 1:25 and 1:75; on a
 feet-and-inches sheet also the architect's 1/4" = 1'-0" and the engineer's
@@ -61,6 +61,17 @@ without one the sheet says "not dated" and the PDF carries the fixed date
 exports. Files are only written when planning succeeds, each one whole or not
 at all. --format json prints the plan as JSON on standard output instead of
 the summary.
+=======
+--pdf writes the floor layout sheet; --csv, --json and --geojson write the
+exports. Every destination is checked before planning: none may be the
+layout or another output, a directory or a device. The files are written all
+or none: each goes to a temporary file first, and they replace their
+targets only when every one was written (an existing file keeps its
+permissions; a symbolic link is kept and its target written). "-" writes
+that output to standard output instead of the summary; the null device
+discards it. --format json prints the plan as JSON on standard output
+instead of the summary.
+>>>>>>> e2a66e7 (export: write a run's outputs all or none; refuse inputs, duplicates, directories and devices as destinations; keep modes and links; - is standard output; clean temporaries on signals)
 
 Examples:
   arcwright plan layouts/anechoic-model-jet.yaml --pdf sheet.pdf
@@ -152,55 +163,58 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	if o.PDF == "" && (o.Paper != "" || o.Scale != "") {
 		return usageError{fmt.Errorf("--paper and --scale choose the sheet's paper and scale: give --pdf too")}
 	}
-	p, err := loadPlan(o.Layout, o.Units, "")
-	if err != nil {
-		return err
-	}
-	// render everything first: a failure leaves no file behind
-	type output struct {
-		path string
-		data []byte
-	}
-	var outs []output
-	render := func(path string, f func(io.Writer) error) error {
-		if path == "" {
-			return nil
+	// every destination is checked before any work
+	var p *planner.Plan
+	var outs []export.Output
+	toStdout := false
+	add := func(label, path string, f func(io.Writer) error) {
+		if path != "" {
+			outs = append(outs, export.Output{Label: label, Path: path, Write: f})
+			toStdout = toStdout || path == export.Stdout
 		}
-		var b bytes.Buffer
-		if err := f(&b); err != nil {
-			return fmt.Errorf("%s: %w", path, err)
-		}
-		outs = append(outs, output{path, b.Bytes()})
-		return nil
 	}
-	if err := render(o.PDF, func(b io.Writer) error {
+	add("--pdf", o.PDF, func(b io.Writer) error {
 		return sheet.Write(b, p, sheet.Options{Paper: o.Paper, Scale: scale})
-	}); err != nil {
+	})
+	add("--csv", o.CSV, func(b io.Writer) error { return export.CSV(b, p) })
+	add("--json", o.JSON, func(b io.Writer) error { return export.JSON(b, p) })
+	add("--geojson", o.GeoJSON, func(b io.Writer) error { return export.GeoJSON(b, p) })
+	if toStdout && o.Format == "json" {
+		return usageError{errors.New("--format json prints the plan on standard output, and so does an output given as -: choose one")}
+	}
+	ins := []export.Input{{Label: "the layout", Path: o.Layout}}
+	if err := checkOutputs(outs, ins); err != nil {
 		return err
 	}
-	for _, r := range []struct {
-		path string
-		f    func(io.Writer, *planner.Plan) error
-	}{{o.CSV, export.CSV}, {o.JSON, export.JSON}, {o.GeoJSON, export.GeoJSON}} {
-		f := r.f
-		if err := render(r.path, func(b io.Writer) error { return f(b, p) }); err != nil {
-			return err
-		}
+	if p, err = loadPlan(o.Layout, o.Units, ""); err != nil {
+		return err
 	}
-	for _, out := range outs {
-		data := out.data
-		if err := export.WriteFile(out.path, func(f io.Writer) error { _, err := f.Write(data); return err }); err != nil {
-			return err
-		}
+	// every file is written to a temporary first: a failure leaves none
+	if err := export.WriteFiles(outs, ins, w); err != nil {
+		return err
 	}
-	if o.Format == "json" {
+	switch {
+	case toStdout:
+		return nil // standard output holds an export
+	case o.Format == "json":
 		return export.JSON(w, p)
 	}
 	planText(w, p)
 	for _, out := range outs {
-		fmt.Fprintf(w, "wrote %s\n", out.path)
+		fmt.Fprintf(w, "wrote %s\n", out.Path)
 	}
 	return nil
+}
+
+// checkOutputs checks the destinations of a run before any work: one that
+// is an input, another output, a directory or a device is a bad command
+// line; one that cannot be written is a failed write.
+func checkOutputs(outs []export.Output, ins []export.Input) error {
+	err := export.CheckOutputs(outs, ins)
+	if errors.Is(err, export.ErrSamePath) || errors.Is(err, export.ErrNotRegular) {
+		return usageError{err}
+	}
+	return err
 }
 
 // planText prints the plan's summary.

@@ -71,7 +71,14 @@
 //
 // # Files
 //
-// [WriteFile] writes through a temporary file in the target directory and
-// renames it over the target only when everything succeeded, so a failed
-// run leaves no partial output.
+// [WriteFiles] writes the outputs of one run all or none: [CheckOutputs]
+// first refuses a destination that is an input or another output (paths
+// compared after following links), a directory or a device, and one whose
+// directory cannot be written; then every file goes to a temporary file
+// next to its target, and the temporaries replace their targets only when
+// all were written. A replaced file keeps its permissions, a symbolic link
+// is kept and its target written, "-" is standard output, the null device
+// discards, a named pipe is written through, and SIGINT, SIGTERM or SIGHUP
+// during the writing removes the temporaries. [WriteFile] does the same
+// for one file.
 package export

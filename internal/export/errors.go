@@ -20,6 +20,11 @@ var (
 	ErrNotFinite = errors.New("export: not a finite number")
 	// ErrNoPath: WriteFile was given an empty file name.
 	ErrNoPath = errors.New("export: no file name")
+	// ErrSamePath: an output's destination is an input of the run or the
+	// destination of another output.
+	ErrSamePath = errors.New("export: an output would overwrite another file of the run")
+	// ErrNotRegular: a destination is a directory, a device or a socket.
+	ErrNotRegular = errors.New("export: not a file that can be written")
 )
 
 // checkPlan returns an error unless p can be written: p and its request are

@@ -90,8 +90,12 @@ func TestWriteFile(t *testing.T) {
 			if err != nil {
 				t.Fatal(err)
 			}
-			if got := fi.Mode().Perm(); got != 0o644 {
-				t.Errorf("mode: got %v, want -rw-r--r--", got)
+			want := fs.FileMode(0o644) // a new file
+			if c.old != "" {
+				want = 0o600 // a replaced file keeps its mode
+			}
+			if got := fi.Mode().Perm(); got != want {
+				t.Errorf("mode: got %v, want %v", got, want)
 			}
 		})
 	}
