@@ -305,3 +305,46 @@ func TestEmptyPlan(t *testing.T) {
 	}
 	render(t, m)
 }
+
+// TestLongNames builds sheets with names far longer than any column or
+// title cell (issue 10 item 6: a 260-character array name, 160 on A4, a
+// 1000-character operating-point name and a 25,600-character title looped
+// in the text wrapper or took 17 s). Every build ends; the names are capped
+// at validation, so this only guards the sheet.
+func TestLongNames(t *testing.T) {
+	tests := []struct {
+		name  string
+		paper string
+		edit  func(p *planner.Plan)
+	}{
+		{"array name 260", "A3", func(p *planner.Plan) { renameArray(p, strings.Repeat("W", 260)) }},
+		{"array name 160 on A4", "A4", func(p *planner.Plan) { renameArray(p, strings.Repeat("W", 160)) }},
+		{"point name 1000", "A4", func(p *planner.Plan) {
+			p.Points[p.Governing].Name = strings.Repeat("SP", 500)
+			p.Points[p.GoverningHot].Name = strings.Repeat("SP", 500)
+		}},
+		{"title 25600", "A4", func(p *planner.Plan) { p.Request.Title.Title = strings.Repeat("Survey ", 3657) }},
+		{"title 25600 without a space", "A4", func(p *planner.Plan) { p.Request.Title.Title = strings.Repeat("W", 25600) }},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			p := chamberPlan(t)
+			tt.edit(p)
+			m := build(t, p, sheet.Options{Paper: tt.paper})
+			if len(m.Pages) > 60 {
+				t.Errorf("got %d sheets, want the long name not to multiply them", len(m.Pages))
+			}
+		})
+	}
+}
+
+// renameArray gives the first array and its stations the name n.
+func renameArray(p *planner.Plan, n string) {
+	old := p.Arrays[0].Name
+	p.Arrays[0].Name = n
+	for i := range p.Stations {
+		if p.Stations[i].Array == old {
+			p.Stations[i].Array = n
+		}
+	}
+}

@@ -69,16 +69,27 @@ func printable(r rune) bool {
 }
 
 // meter measures text in the core font, the same way the renderer prints it.
+// The core fonts have no kerning, so a text's width is the sum of its
+// characters' widths: each character is measured once per size and weight
+// and remembered, and every measure and wrap is linear in the text's length.
 type meter struct {
-	pdf  *gofpdf.Fpdf
-	tr   func(string) string
+	pdf   *gofpdf.Fpdf
+	tr    func(string) string
+	size  float64
+	bold  bool
+	cache map[glyphKey]float64
+}
+
+// glyphKey is a character at a size (pt) and weight.
+type glyphKey struct {
 	size float64
 	bold bool
+	r    rune
 }
 
 func newMeter() *meter {
 	pdf := gofpdf.New("L", "mm", "A4", "")
-	m := &meter{pdf: pdf, tr: pdf.UnicodeTranslatorFromDescriptor("")}
+	m := &meter{pdf: pdf, tr: pdf.UnicodeTranslatorFromDescriptor(""), cache: make(map[glyphKey]float64)}
 	m.set(8, false)
 	return m
 }
@@ -95,16 +106,40 @@ func (m *meter) set(size float64, bold bool) {
 	m.size, m.bold = size, bold
 }
 
+// runeWidth returns the printed width of r at size (pt), mm.
+func (m *meter) runeWidth(r rune, size float64, bold bool) float64 {
+	k := glyphKey{size, bold, r}
+	if w, ok := m.cache[k]; ok {
+		return w
+	}
+	m.set(size, bold)
+	w := m.pdf.GetStringWidth(m.tr(string(r)))
+	m.cache[k] = w
+	return w
+}
+
 // width returns the printed width of s at size (pt), mm.
 func (m *meter) width(s string, size float64, bold bool) float64 {
-	m.set(size, bold)
-	return m.pdf.GetStringWidth(m.tr(s))
+	w := 0.0
+	for _, r := range s {
+		w += m.runeWidth(r, size, bold)
+	}
+	return w
 }
 
 // wrap breaks s into lines no wider than w (mm) at size (pt), at spaces;
 // a word wider than w is broken between characters. Newlines in s start a
-// new line. An empty s gives one empty line.
+// new line. An empty s gives one empty line. A w that is not positive (or
+// NaN) puts each character on a line of its own. The cost is linear in the
+// length of s.
 func (m *meter) wrap(s string, w, size float64, bold bool) []string {
+	if !(w > 0) {
+		w = 0
+	}
+	// sums of character widths differ from a whole line's measure by
+	// rounding: a line within wrapTol of w fits
+	w += wrapTol
+	space := m.runeWidth(' ', size, bold)
 	var out []string
 	for _, para := range strings.Split(s, "\n") {
 		words := strings.FieldsFunc(para, func(r rune) bool { return r == ' ' })
@@ -112,44 +147,45 @@ func (m *meter) wrap(s string, w, size float64, bold bool) []string {
 			out = append(out, "")
 			continue
 		}
-		line := ""
+		var line strings.Builder
+		lw := 0.0
 		for _, word := range words {
-			try := word
-			if line != "" {
-				try = line + " " + word
-			}
-			if m.width(try, size, bold) <= w {
-				line = try
+			ww := m.width(word, size, bold)
+			if line.Len() > 0 && lw+space+ww <= w {
+				line.WriteByte(' ')
+				line.WriteString(word)
+				lw += space + ww
 				continue
 			}
-			if line != "" {
-				out = append(out, line)
+			if line.Len() > 0 {
+				out = append(out, line.String())
+				line.Reset()
 			}
-			line = word
-			for m.width(line, size, bold) > w {
-				cut := m.fit(line, w, size, bold)
-				out = append(out, line[:cut])
-				line = line[cut:]
+			if ww <= w {
+				line.WriteString(word)
+				lw = ww
+				continue
 			}
+			// a word wider than the line: break it between characters
+			start, cw := 0, 0.0
+			for i, r := range word {
+				rw := m.runeWidth(r, size, bold)
+				if i > start && cw+rw > w {
+					out = append(out, word[start:i])
+					start, cw = i, 0
+				}
+				cw += rw
+			}
+			line.WriteString(word[start:])
+			lw = cw
 		}
-		out = append(out, line)
+		out = append(out, line.String())
 	}
 	return out
 }
 
-// fit returns the byte length of the longest prefix of s (at least one
-// character) that fits in w mm.
-func (m *meter) fit(s string, w, size float64, bold bool) int {
-	end := 0
-	for i, r := range s {
-		next := i + utf8.RuneLen(r)
-		if end > 0 && m.width(s[:next], size, bold) > w {
-			break
-		}
-		end = next
-	}
-	return end
-}
+// wrapTol is the rounding allowance of wrap, mm.
+const wrapTol = 1e-6
 
 // lineHeight returns the line spacing of text at size (pt), mm.
 func lineHeight(size float64) float64 { return size * mmPerPt * 1.2 }

@@ -3,6 +3,7 @@ package sheet
 import (
 	"fmt"
 	"strings"
+	"unicode/utf8"
 )
 
 // titleBlock draws the title block in the bottom-right corner of pg.
@@ -71,25 +72,22 @@ func (b *builder) titleBlock(pg *Page, pages int) {
 }
 
 // fitText shrinks text to fit w (mm), down to 4.5 pt, then shortens it with
-// an ellipsis.
+// an ellipsis; linear in the length of s.
 func (b *builder) fitText(s string, w, size float64, bold bool) (float64, string) {
 	for ; size > 4.5 && b.m.width(s, size, bold) > w; size -= 0.5 {
 	}
 	if b.m.width(s, size, bold) <= w {
 		return size, s
 	}
-	for len(s) > 1 && b.m.width(s+"…", size, bold) > w {
-		_, n := lastRune(s)
-		s = s[:len(s)-n]
-	}
-	return size, s + "…"
-}
-
-func lastRune(s string) (rune, int) {
-	for i := len(s) - 1; i >= 0; i-- {
-		if s[i]&0xC0 != 0x80 {
-			return []rune(s[i:])[0], len(s) - i
+	room := w - b.m.width("…", size, bold)
+	end, used := 0, 0.0
+	for i, r := range s {
+		rw := b.m.runeWidth(r, size, bold)
+		if i > 0 && used+rw > room {
+			break
 		}
+		used += rw
+		end = i + utf8.RuneLen(r)
 	}
-	return 0, 1
+	return size, s[:end] + "…"
 }
