@@ -41,6 +41,9 @@ type field struct {
 	plane, planeLaminar bool
 	planeB              float64 // momentum-equivalent slot width ρj/ρa·height·Aj/A, m
 	reH                 float64 // slot Reynolds number
+	// floorX and floorW tabulate the flux floor of the half-width (m) at
+	// axial nodes (m); empty when the model has no floor (see flux.go).
+	floorX, floorW []float64
 }
 
 func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
@@ -65,7 +68,9 @@ func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
 		// but its half-velocity line is held no closer to the axis than
 		// the lip line, where it stays through the core of round jets
 		// (common practice).
-		f.wRate = math.Max(MixingLayerGrowth(m.Growth, s, e.ConvectiveMach)/gaussianVorticityThickness, f.r0/f.lc)
+		phi := math.Min(1, GrowthReduction(e.ConvectiveMach)+m.GrowthScatter)
+		growth := m.Growth / 2 * (1 + math.Sqrt(s)) * phi
+		f.wRate = math.Max(growth/gaussianVorticityThickness, f.r0/f.lc)
 		f.wc = f.wRate * f.lc
 		f.su, f.st = gaussianShape(), gaussianShape()
 		f.lambda = m.Lambda
@@ -79,6 +84,7 @@ func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
 		f.reH = e.SlotReynolds
 		f.planeLaminar = f.reH < laminarPlaneRe
 	}
+	f.buildFloor(e, a)
 	return f
 }
 
@@ -173,8 +179,18 @@ func (f *field) rc(x float64) float64 {
 	return f.r0 * (1 - max(x, 0)/f.lc)
 }
 
-// w returns the half-value width of the velocity shoulder, m.
+// w returns the half-value width of the velocity shoulder, m: the
+// spreading law's width, widened where needed to the flux floor.
 func (f *field) w(x float64) float64 {
+	if len(f.floorX) == 0 {
+		return f.baseW(x)
+	}
+	return max(f.baseW(x), f.floor(x))
+}
+
+// baseW returns the half-value width of the velocity shoulder from the
+// mixing-layer and far-field spreading laws alone, m.
+func (f *field) baseW(x float64) float64 {
 	switch {
 	case x <= 0:
 		return 0
@@ -182,6 +198,8 @@ func (f *field) w(x float64) float64 {
 		return laminarRoundWidth * x / f.re
 	case x <= f.lc:
 		return f.wRate * x
+	case f.m.Continuous:
+		return max(f.wc+f.m.S*(x-f.lc), f.m.S*(x-f.x0))
 	}
 	return max(f.wc, f.m.S*(x-f.x0))
 }

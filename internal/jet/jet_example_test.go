@@ -47,8 +47,8 @@ func ExampleNewPlume() {
 	// Output:
 	// core 0.211 m
 	// velocity zone, nominal: 19.38 m long, 0.93 m wide at most
-	// velocity zone, conservative: 20.70 m long, 1.21 m wide at most
+	// velocity zone, conservative: 20.70 m long, 1.23 m wide at most
 	// hot zone, nominal: 2.63 m long, 0.14 m wide at most
-	// hot zone, conservative: 2.82 m long, 0.20 m wide at most
-	// clearance of a microphone 1 m off the axis at x = 0.5 m: 0.87 m
+	// hot zone, conservative: 2.82 m long, 0.23 m wide at most
+	// clearance of a microphone 1 m off the axis at x = 0.5 m: 0.82 m
 }

@@ -51,6 +51,21 @@ type Model struct {
 	// its centreline starts to fall at the end of the potential core; the
 	// conservative one keeps the cap, which lies above the blend.
 	Blend bool
+	// GrowthScatter is added to the compressibility reduction Φ(Mc) of the
+	// mixing-layer growth (capped at 1): 0 for the central fit, the upper
+	// end of its ±0.1 data scatter for the conservative model, whose
+	// shoulder must not take the growth-reducing end.
+	GrowthScatter float64
+	// Continuous, when true, lets the half-width keep growing at the
+	// far-field rate S from its end-of-core value, w = wc + S·(x − Lc),
+	// instead of holding wc until S·(x − x0) catches up: a held width while
+	// the centreline decays pinches the zone into a waist.
+	Continuous bool
+	// FluxFloor is the fraction of the exit momentum flux and of the exit
+	// excess-enthalpy (mixture-fraction) flux that the mean field must carry
+	// at every x, computed with its own density field; the half-width is
+	// widened where the spreading law falls short. 0 enforces nothing.
+	FluxFloor float64
 }
 
 // NominalModel returns central values of the published constants.
@@ -118,5 +133,13 @@ func ConservativeModel() Model {
 		// scatter (Heskestad 1965, from memory).
 		PlaneS: 0.11,
 		PlaneK: 2.6,
+		// the whole exit momentum and excess-enthalpy flux is given to the
+		// mean flow (conservation laws; the 5–10 % that turbulence carries
+		// in a real jet is added to the mean, which only widens the zone)
+		FluxFloor: 1,
+		// Φ + 0.1: the upper end of the data scatter about the Dimotakis
+		// fit for Mc ≳ 0.5 (the project's reference sheet §7, from memory)
+		GrowthScatter: 0.1,
+		Continuous:    true,
 	}
 }

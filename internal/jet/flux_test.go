@@ -1,0 +1,167 @@
+package jet
+
+import (
+	"fmt"
+	"math"
+	"testing"
+)
+
+// fluxCase is one jet of the flux and outline grid.
+type fluxCase struct {
+	name string
+	n    Nozzle
+	c    Condition
+}
+
+// fluxGrid spans NPR 1.05–5 and T0/Ta 1–4 over convergent,
+// convergent-divergent, rectangular (round-law and plane-law aspect ratios)
+// and coaxial exits: the range the issue of flux-consistent zones names.
+func fluxGrid() []fluxCase {
+	a := StandardAmbient()
+	var cs []fluxCase
+	nozzles := []struct {
+		name string
+		n    Nozzle
+	}{
+		{"convergent", Nozzle{Kind: Convergent, Diameter: 0.0508}},
+		{"c-d M1.5", Nozzle{Kind: ConvergentDivergent, Diameter: 0.0508, DesignMach: 1.5}},
+		{"rect AR3", RectangularFromAspect(0.0508, 3, 0)},
+		{"rect AR25", RectangularFromAspect(0.2, 25, 0)},
+		{"coaxial", Nozzle{Kind: Coaxial, Diameter: 0.05, SecondaryDiameter: 0.09}},
+	}
+	for _, nz := range nozzles {
+		for _, npr := range []float64{1.05, 1.3, 1.69, 2.5, 3.5, 5} {
+			for _, tr := range []float64{1, 1.5, 2.5, 3.5, 4} {
+				c := Condition{Primary: Stream{NPR: npr, TemperatureRatio: tr}, Ambient: a}
+				if nz.n.Kind == Coaxial {
+					c.Secondary = &Stream{NPR: 1 + (npr-1)/2, TemperatureRatio: 1}
+				}
+				cs = append(cs, fluxCase{fmt.Sprintf("%s NPR %.2f T0/Ta %.1f", nz.name, npr, tr), nz.n, c})
+			}
+		}
+	}
+	return cs
+}
+
+// integrateFluxes integrates the momentum flux (N) and the jet-gas
+// (mixture-fraction) mass flux (kg/s) of field f across the section at x by
+// the trapezoidal rule on a fine radial grid, with the density of the
+// field's own mean state: ambient pressure, static temperature
+// Ta + ΔT0·θ − u²/(2cp) and the mixture's gas constant. It shares nothing
+// with the construction in flux.go but the field's u and θ.
+func integrateFluxes(f *field, e Exit, a Ambient, x float64) (j, h float64) {
+	air, gas := Air(), e.Gas
+	dT0 := e.TotalTemperature - a.Temperature
+	rmax := f.rc(x) + 8*f.lambda*f.w(x) + 1e-9
+	const n = 4000
+	dr := rmax / n
+	for i := 0; i <= n; i++ {
+		r := float64(i) * dr
+		u := f.u(x, r)
+		th := f.theta(x, r)
+		rg := air.R + th*(gas.R-air.R)
+		cp := air.Cp() + th*(gas.Cp()-air.Cp())
+		rho := a.Pressure / (rg * (a.Temperature + dT0*th - u*u/(2*cp)))
+		wt := dr
+		if i == 0 || i == n {
+			wt /= 2
+		}
+		j += wt * 2 * math.Pi * r * rho * u * u
+		h += wt * 2 * math.Pi * r * rho * u * th
+	}
+	return j, h
+}
+
+// TestConservativeFieldCarriesTheFluxes checks, over the grid, that the
+// conservative mean field carries at least 90 % of the exit momentum flux
+// and of the exit excess-enthalpy (mixture-fraction) flux at every x, as a
+// free jet at ambient pressure must (momentum and energy conservation,
+// derived; the 90 % leaves room for the turbulent share, about 5–10 % of
+// the momentum flux in the developed region: Hussein, Capp & George 1994,
+// from memory). The construction aims at 100 %.
+func TestConservativeFieldCarriesTheFluxes(t *testing.T) {
+	const floor = 0.90
+	worst := math.Inf(1)
+	for _, tc := range fluxGrid() {
+		p, err := NewPlume(tc.n, tc.c, DefaultLimits())
+		if err != nil {
+			t.Fatalf("%s: %v", tc.name, err)
+		}
+		f, e := &p.cons, p.exit
+		for _, k := range []float64{0.25, 0.5, 1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 12, 14, 17, 20, 25, 30, 40, 60, 100} {
+			x := k * e.FullyExpandedDiameter
+			j, h := integrateFluxes(f, e, tc.c.Ambient, x)
+			rj, rh := j/e.Thrust, h/e.MassFlow
+			worst = math.Min(worst, math.Min(rj, rh))
+			if rj < floor || rh < floor {
+				t.Errorf("%s at %g Dj: carries %.3f of the exit momentum flux and %.3f of the exit enthalpy flux, want at least %.2f of both",
+					tc.name, k, rj, rh, floor)
+			}
+		}
+	}
+	t.Logf("smallest carried fraction over the grid: %.3f", worst)
+}
+
+// TestConservativeOutlineHasNoWaist checks over the grid that the
+// conservative zones never narrow between the exit and their widest point
+// (a free jet only spreads: a waist is an artefact of the model).
+func TestConservativeOutlineHasNoWaist(t *testing.T) {
+	for _, tc := range fluxGrid() {
+		p, err := NewPlume(tc.n, tc.c, DefaultLimits())
+		if err != nil {
+			t.Fatalf("%s: %v", tc.name, err)
+		}
+		for _, z := range []Zone{VelocityZone, HotZone} {
+			env := p.Envelope(z, Conservative)
+			if env.Length == 0 {
+				continue
+			}
+			prev := 0.0
+			const n = 600
+			for i := 0; i <= n; i++ {
+				x := env.MaxRadiusAt * float64(i) / n
+				r := env.Radius(x)
+				// 1e-9 relative: rounding, not a waist
+				if r < prev*(1-1e-9) {
+					t.Errorf("%s %s: radius falls from %.5g m to %.5g m at x = %.4g m, before its widest point at %.4g m",
+						tc.name, z, prev, r, x, env.MaxRadiusAt)
+					break
+				}
+				prev = math.Max(prev, r)
+			}
+		}
+	}
+}
+
+// TestHeatedJetZoneReproduction is the reported case: 50.8 mm, NPR 1.69,
+// T0/Ta 3.5. The old conservative hot zone shrank from 98 mm at 7 Dj to
+// 87 mm at 10 Dj and the velocity zone from 94 to 89 mm. A field carrying
+// 90–100 % of both fluxes gives 106–112 mm (velocity) and 98–104 mm (hot)
+// at 10 Dj (the independent review's reconstruction; Chen & Rodi 1980
+// upper-end scalar constants give about 107 mm, from memory).
+func TestHeatedJetZoneReproduction(t *testing.T) {
+	a := StandardAmbient()
+	n := Nozzle{Kind: Convergent, Diameter: 0.0508}
+	c := Condition{Primary: Stream{NPR: 1.69, TemperatureRatio: 3.5}, Ambient: a}
+	p, err := NewPlume(n, c, DefaultLimits())
+	if err != nil {
+		t.Fatal(err)
+	}
+	dj := p.Exit().FullyExpandedDiameter
+	for _, tc := range []struct {
+		z    Zone
+		at10 float64 // least radius at 10 Dj, m
+	}{
+		{VelocityZone, 0.106},
+		{HotZone, 0.098},
+	} {
+		env := p.Envelope(tc.z, Conservative)
+		r7, r10 := env.Radius(7*dj), env.Radius(10*dj)
+		if r10 < r7 {
+			t.Errorf("%s: radius %.4f m at 10 Dj is less than %.4f m at 7 Dj", tc.z, r10, r7)
+		}
+		if r10 < tc.at10 {
+			t.Errorf("%s: radius at 10 Dj %.4f m, want at least %.3f m", tc.z, r10, tc.at10)
+		}
+	}
+}
