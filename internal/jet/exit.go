@@ -73,6 +73,12 @@ type Exit struct {
 	EffectiveDiameter     float64   // Thring–Newby Dj·sqrt(ρj/ρa), m
 	AcousticMach          float64   // Uj/a∞
 	Reynolds              float64   // ρj·Uj·Dj/μ(Tj)
+	// AmbientReynolds is Uj·D_eff/ν∞ = ρa·Uj·D_eff/μ(Ta): the Reynolds
+	// number of the mixed jet, whose momentum flux is that of an ambient-
+	// density jet of diameter D_eff and whose viscosity is the entrained
+	// air's. It decides laminar or turbulent: a hot jet's own viscosity
+	// would call a fast exhaust laminar.
+	AmbientReynolds float64
 	SlotReynolds          float64   // ρj·Uj·height/μ(Tj) for rectangular exits, 0 otherwise
 	ConvectiveMach        float64   // Uj/(aj + a∞), Papamoschou & Roshko 1988
 	SoundSpeed            float64   // aj, m/s
@@ -221,6 +227,7 @@ func ExitState(n Nozzle, c Condition) (Exit, error) {
 	e.AcousticMach = e.Velocity / e.AmbientSoundSpeed
 	mu := Viscosity(e.StaticTemperature)
 	e.Reynolds = e.Density * e.Velocity * e.FullyExpandedDiameter / mu
+	e.AmbientReynolds = e.AmbientDensity * e.Velocity * e.EffectiveDiameter / Viscosity(a.Temperature)
 	if n.Kind == Rectangular {
 		e.SlotReynolds = e.Density * e.Velocity * n.Height / mu
 	}

@@ -36,7 +36,7 @@ type field struct {
 	lambda  float64 // thermal half-width over velocity half-width
 	su, st  shape   // radial shapes of velocity and temperature
 	laminar bool    // Schlichting round laminar jet
-	re      float64 // Reynolds number on dj
+	re      float64 // Reynolds number Uj·D_eff/ν∞ (laminar fields)
 	// plane-jet law for high-aspect-ratio rectangular exits
 	plane, planeLaminar bool
 	planeB              float64 // momentum-equivalent slot width ρj/ρa·height·Aj/A, m
@@ -47,13 +47,15 @@ type field struct {
 }
 
 func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
-	f := field{m: m, uj: e.Velocity, dj: e.FullyExpandedDiameter, de: e.EffectiveDiameter, re: e.Reynolds}
+	f := field{m: m, uj: e.Velocity, dj: e.FullyExpandedDiameter, de: e.EffectiveDiameter, re: e.AmbientReynolds}
 	f.r0 = f.dj / 2
 	f.dT0 = e.TotalTemperature - a.Temperature
 	f.x0 = m.X0 * f.dj
 	f.laminar = laminar
 	if laminar {
-		f.lc = laminarRoundCore * f.re * f.dj
+		// the Schlichting jet of the same kinematic momentum flux in
+		// ambient fluid: K = (π/4)·Uj²·D_eff², ν = ν∞
+		f.lc = laminarRoundCore * f.re * f.de
 		f.su = schlichtingShape(1)
 		f.st = schlichtingShape(prandtlAir)
 		f.lambda = f.st.half / f.su.half
@@ -108,7 +110,7 @@ func (f *field) uc(x float64) float64 {
 	switch {
 	case x <= f.lc:
 	case f.laminar:
-		u = f.uj * laminarRoundCore * f.re * f.dj / x
+		u = f.uj * laminarRoundCore * f.re * f.de / x
 	case f.m.Blend:
 		u = f.uj * blendDecay(x, f.lc, f.x0u, f.m.B*f.de)
 	case x-f.x0u > f.m.B*f.de:
@@ -140,7 +142,7 @@ func (f *field) thetac(x float64) float64 {
 	case f.laminar:
 		// heat-flux conservation with the Schlichting profiles (derived):
 		// ΔTc/ΔT0 = (1 + 2·Pr)/32·Re·D/x
-		return math.Min(1, (1+2*prandtlAir)/32*f.re*f.dj/x)
+		return math.Min(1, (1+2*prandtlAir)/32*f.re*f.de/x)
 	case x <= f.lc:
 		return 1
 	case f.m.Blend:

@@ -165,3 +165,60 @@ func TestHeatedJetZoneReproduction(t *testing.T) {
 		}
 	}
 }
+
+// TestHotSlowJetIsNotLaminar is the reported case: 50.8 mm, NPR 1.0001,
+// T0/Ta 7. On the hot gas's own viscosity its Reynolds number is about
+// 1,500 and it was given Schlichting's laminar solution with a 7.3 m
+// "potential core"; the mixed jet entrains ambient air, and on the ambient
+// viscosity and the effective diameter it is turbulent (Re ≈ 1.4·10⁴,
+// hand-computed: 10.8 m/s · 0.0192 m / 1.47·10⁻⁵ m²/s). Transition at
+// about 2,000 is common practice.
+func TestHotSlowJetIsNotLaminar(t *testing.T) {
+	c := Condition{Primary: Stream{NPR: 1.0001, TemperatureRatio: 7}, Ambient: StandardAmbient()}
+	p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: 0.0508}, c, DefaultLimits())
+	if err != nil {
+		t.Fatal(err)
+	}
+	e := p.Exit()
+	if p.Laminar() || Has(p.Flags(), FlagLaminar) {
+		t.Errorf("laminar at Re %.0f (ambient-viscosity Re %.0f), want turbulent", e.Reynolds, e.AmbientReynolds)
+	}
+	if e.AmbientReynolds < 1e4 || e.AmbientReynolds > 2e4 {
+		t.Errorf("ambient-viscosity Reynolds number %.0f, want about 1.4e4", e.AmbientReynolds)
+	}
+	if lc := p.CoreLength(Nominal); lc > 1 {
+		t.Errorf("nominal core %.2f m, want a turbulent core of a few diameters", lc)
+	}
+}
+
+// TestHotLipLayerGrowsFaster checks the conservative zones in the first
+// 2–7 Dj of a hot jet against an erf mixing layer drawn from the lip with
+// σ = 9.8 (Görtler 1942, the wide end, from memory) and the Brown & Roshko
+// (1974) density factor (1 + sqrt(ρa/ρj))/2 (from memory): the old edge
+// lay 4–9 % inside it.
+func TestHotLipLayerGrowsFaster(t *testing.T) {
+	a := StandardAmbient()
+	for _, tr := range []float64{2, 3.5} {
+		c := Condition{Primary: Stream{NPR: 1.69, TemperatureRatio: tr}, Ambient: a}
+		p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: 0.0508}, c, DefaultLimits())
+		if err != nil {
+			t.Fatal(err)
+		}
+		e := p.Exit()
+		factor := (1 + math.Sqrt(1/e.DensityRatio)) / 2
+		lip := e.FullyExpandedDiameter / 2
+		eps := p.Limits().Velocity / e.Velocity
+		epsT := (p.Limits().Temperature - a.Temperature) / (e.TotalTemperature - a.Temperature)
+		for _, k := range []float64{2, 3, 4, 5, 6, 7} {
+			x := k * e.FullyExpandedDiameter
+			wantU := lip + x*math.Erfinv(1-2*eps)/9.8*factor
+			if got := p.Envelope(VelocityZone, Conservative).Radius(x); got < wantU*(1-1e-9) {
+				t.Errorf("T0/Ta %g, %g Dj: velocity zone %.4f m, inside the lip layer's edge %.4f m", tr, k, got, wantU)
+			}
+			wantT := lip + x*1.3*math.Erfinv(1-2*epsT)/9.8*factor
+			if got := p.Envelope(HotZone, Conservative).Radius(x); got < wantT*(1-1e-9) {
+				t.Errorf("T0/Ta %g, %g Dj: hot zone %.4f m, inside the lip layer's edge %.4f m", tr, k, got, wantT)
+			}
+		}
+	}
+}

@@ -114,7 +114,8 @@ func TestSchlichtingAgainstODE(t *testing.T) {
 }
 
 // TestLaminarPlume checks the laminar regime of the plume against the
-// Schlichting nozzle forms of the reference sheet §10 (DERIVED):
+// Schlichting nozzle forms of the reference sheet §10 (DERIVED), on the
+// effective diameter and the ambient viscosity:
 // um/U0 = 0.09375·Re·D/x and r½/x = 5.9453/Re downstream of x = 0.094·Re·D.
 func TestLaminarPlume(t *testing.T) {
 	// a 2 mm bleed jet at 8 m/s: Re ≈ 1000
@@ -126,10 +127,10 @@ func TestLaminarPlume(t *testing.T) {
 		t.Fatal(err)
 	}
 	if !p.Laminar() || !Has(p.Flags(), FlagLaminar) {
-		t.Fatalf("Re %g: not flagged laminar", p.Exit().Reynolds)
+		t.Fatalf("Re %g: not flagged laminar", p.Exit().AmbientReynolds)
 	}
 	e := p.Exit()
-	re, d := e.Reynolds, e.FullyExpandedDiameter
+	re, d := e.AmbientReynolds, e.EffectiveDiameter
 	for _, xd := range []float64{0.2, 0.5, 1} {
 		x := xd * re * d
 		if got, want := p.CenterlineVelocity(x)/e.Velocity, 0.09375*re*d/x; !near(got, want, 1e-9) {

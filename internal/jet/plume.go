@@ -29,6 +29,10 @@ type Plume struct {
 	cons   field
 	lipW   float64 // half of the long side of the exit (radius for round exits), m
 	lipH   float64 // half of the short side, m
+	// lightLayer is the Brown & Roshko (1974) density factor of the lip
+	// layer's growth, (1 + sqrt(ρa/ρj))/2, never below 1: a light (hot)
+	// jet's mixing layer grows faster; a dense one's is not let shrink
+	lightLayer float64
 	buoy   Buoyancy
 	env    [2][2]Envelope // [zone-1][variant-1]
 	flags  []Flag
@@ -59,7 +63,7 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 			lim.Temperature, c.Ambient.Temperature)}
 	}
 	p := &Plume{nozzle: n, cond: c, exit: e, limits: lim}
-	laminar := e.Reynolds < laminarRoundRe
+	laminar := e.AmbientReynolds < laminarRoundRe
 	p.nom = newField(nominal, n, e, c.Ambient, laminar)
 	p.cons = newField(conservative, n, e, c.Ambient, false)
 	outer := e.Diameter
@@ -73,6 +77,7 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 		k := math.Max(1, e.FullyExpandedDiameter/e.Diameter)
 		p.lipW, p.lipH = k*n.Width/2, k*n.Height/2
 	}
+	p.lightLayer = math.Max(1, (1+math.Sqrt(1/e.DensityRatio))/2)
 	br := RAir * c.Ambient.Temperature / (e.Gas.R * e.TotalTemperature)
 	p.buoy = buoyancyOf(e.DensityRatio, br, e.Velocity, math.Pi*e.FullyExpandedDiameter*e.FullyExpandedDiameter/4)
 	p.buildEnvelopes()
@@ -158,6 +163,7 @@ func (p *Plume) nearEdge(x, slope float64) float64 {
 	if slope < 0 {
 		slope = 0
 	}
+	slope *= p.lightLayer
 	if p.nozzle.Kind == Rectangular {
 		return math.Hypot(p.lipW+slope*x, p.lipH+slope*x)
 	}
