@@ -47,6 +47,9 @@ type field struct {
 }
 
 func newField(m Model, n Nozzle, e Exit, a Ambient, laminar bool) field {
+	if n.Contour == Pipe && m.PipeB > 0 && m.PipeKT > 0 {
+		m.B, m.KT = m.PipeB, m.PipeKT
+	}
 	f := field{m: m, uj: e.Velocity, dj: e.FullyExpandedDiameter, de: e.EffectiveDiameter, re: e.AmbientReynolds}
 	f.r0 = f.dj / 2
 	f.dT0 = e.TotalTemperature - a.Temperature

@@ -222,3 +222,38 @@ func TestHotLipLayerGrowsFaster(t *testing.T) {
 		}
 	}
 }
+
+// TestPipeExitDecaysMoreSlowly checks the pipe-exit constants: far from
+// the exit the conservative centreline follows Uc/Uj = 6.6·D_eff/(x − x0)
+// (pipe jets B ≈ 6.4–6.6, Mi, Nathan & Nobes 2001, from memory) and the
+// zones of a pipe are longer than those of a contoured nozzle.
+func TestPipeExitDecaysMoreSlowly(t *testing.T) {
+	c := Condition{Primary: Stream{NPR: 1.3, TemperatureRatio: 1}, Ambient: StandardAmbient()}
+	nozzle := Nozzle{Kind: Convergent, Diameter: 0.05}
+	pipe := nozzle
+	pipe.Contour = Pipe
+	pn, err := NewPlume(nozzle, c, DefaultLimits())
+	if err != nil {
+		t.Fatal(err)
+	}
+	pp, err := NewPlume(pipe, c, DefaultLimits())
+	if err != nil {
+		t.Fatal(err)
+	}
+	e := pp.Exit()
+	x := 60 * e.FullyExpandedDiameter
+	want := 6.6 * e.EffectiveDiameter / (x - 4*e.FullyExpandedDiameter) // hand-computed form of the law, x0 = 4 Dj
+	if got := pp.cons.uc(x) / e.Velocity; !near(got, want, 1e-9) {
+		t.Errorf("pipe conservative Uc/Uj at 60 Dj: got %.5f, want %.5f", got, want)
+	}
+	for _, z := range []Zone{VelocityZone} {
+		ln, lp := pn.Envelope(z, Conservative).Length, pp.Envelope(z, Conservative).Length
+		if lp <= ln {
+			t.Errorf("%s: pipe zone %.3f m is not longer than the nozzle's %.3f m", z, lp, ln)
+		}
+	}
+	bad := Nozzle{Kind: ConvergentDivergent, Diameter: 0.05, DesignMach: 1.5, Contour: Pipe}
+	if _, err := NewPlume(bad, c, DefaultLimits()); err == nil {
+		t.Error("a convergent-divergent pipe was accepted")
+	}
+}

@@ -51,6 +51,8 @@ type Model struct {
 	// its centreline starts to fall at the end of the potential core; the
 	// conservative one keeps the cap, which lies above the blend.
 	Blend bool
+	// PipeB and PipeKT replace B and KT for a pipe exit (Nozzle.Contour).
+	PipeB, PipeKT float64
 	// GrowthScatter is added to the compressibility reduction Φ(Mc) of the
 	// mixing-layer growth (capped at 1): 0 for the central fit, the upper
 	// end of its ±0.1 data scatter for the conservative model, whose
@@ -98,6 +100,12 @@ func NominalModel() Model {
 		PlaneK:   2.46,
 		PlaneLaw: true,
 		Blend:    true,
+		// a jet from a long pipe decays more slowly than one from a
+		// contoured nozzle: B ≈ 6.4–6.6 (Mi, Nathan & Nobes 2001, from
+		// memory); the scalar decay constant is scaled by the same ratio
+		// (SUGGESTION)
+		PipeB:  6.4,
+		PipeKT: 5.0 * 6.4 / 5.8,
 	}
 }
 
@@ -137,6 +145,10 @@ func ConservativeModel() Model {
 		// mean flow (conservation laws; the 5–10 % that turbulence carries
 		// in a real jet is added to the mean, which only widens the zone)
 		FluxFloor: 1,
+		// the slow end of the pipe-jet scatter, 6.6 (from memory), and the
+		// scalar constant scaled alike (SUGGESTION)
+		PipeB:  6.6,
+		PipeKT: 5.4 * 6.6 / 6.2,
 		// Φ + 0.1: the upper end of the data scatter about the Dimotakis
 		// fit for Mc ≳ 0.5 (the project's reference sheet §7, from memory)
 		GrowthScatter: 0.1,

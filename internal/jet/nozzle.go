@@ -40,9 +40,32 @@ func (k Kind) String() string {
 	return fmt.Sprintf("Kind(%d)", int(k))
 }
 
+// Contour is how the flow is brought to the exit.
+type Contour int
+
+// Exit contours.
+const (
+	// Contoured is a nozzle with a smooth contraction: a nearly uniform
+	// (top-hat) exit profile and thin boundary layers. The zero value.
+	Contoured Contour = iota
+	// Pipe is a straight duct: a fully developed turbulent exit profile,
+	// whose jet decays and spreads more slowly (see Model.PipeB).
+	Pipe
+)
+
+func (c Contour) String() string {
+	if c == Pipe {
+		return "pipe"
+	}
+	return "nozzle"
+}
+
 // Nozzle is the geometry of the nozzle exit.
 type Nozzle struct {
 	Kind Kind
+	// Contour says whether the exit is a contoured nozzle (the zero value)
+	// or the end of a straight pipe.
+	Contour Contour
 	// Diameter is the exit diameter, m (the primary nozzle for Coaxial).
 	// Unused for Rectangular.
 	Diameter float64
@@ -123,6 +146,12 @@ func (n Nozzle) Validate() error {
 		}
 	default:
 		return &InputError{Field: "nozzle kind", Reason: "must be convergent, convergent-divergent, rectangular or coaxial"}
+	}
+	switch {
+	case n.Contour != Contoured && n.Contour != Pipe:
+		return &InputError{Field: "nozzle contour", Reason: "must be nozzle or pipe"}
+	case n.Contour == Pipe && (n.Kind == ConvergentDivergent || n.Kind == Coaxial):
+		return &InputError{Field: "nozzle contour", Reason: fmt.Sprintf("pipe applies to convergent and rectangular exits, not %s", n.Kind)}
 	}
 	switch n.Kind {
 	case ConvergentDivergent:

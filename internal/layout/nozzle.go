@@ -13,7 +13,10 @@ import (
 )
 
 var (
-	nozzleKeys = []string{"exit", "axis_height", "heading", "kind", "diameter", "design_mach", "long_side", "short_side", "aspect_ratio", "secondary_diameter"}
+	nozzleKeys = []string{"exit", "axis_height", "heading", "kind", "contour", "diameter", "design_mach", "long_side", "short_side", "aspect_ratio", "secondary_diameter"}
+
+	nozzleContours     = map[string]jet.Contour{"nozzle": jet.Contoured, "pipe": jet.Pipe}
+	nozzleContourNames = []string{"nozzle", "pipe"}
 
 	nozzleKinds = map[string]jet.Kind{
 		"convergent":           jet.Convergent,
@@ -104,6 +107,14 @@ func (d *decoder) nozzleShape(s *section, ni *nozzleInfo) {
 		}
 	}
 	ok := ni.kindOK
+	contour := jet.Contoured
+	if n := s.get("contour"); n != nil {
+		if c, good := d.choice(n, s.field("contour"), nozzleContourNames); good {
+			contour = nozzleContours[c]
+		} else {
+			ok = false
+		}
+	}
 	for _, key := range nozzleKeys {
 		kinds, limited := nozzleKeyKinds[key]
 		if limited && ni.kindOK && s.has(key) && !containsKind(kinds, ni.nozzle.Kind) {
@@ -168,6 +179,7 @@ func (d *decoder) nozzleShape(s *section, ni *nozzleInfo) {
 			d.nozzleNumber(s, key, "a number", false, &ok)
 		}
 	}
+	nz.Contour = contour
 	if !ok {
 		return
 	}
@@ -175,6 +187,7 @@ func (d *decoder) nozzleShape(s *section, ni *nozzleInfo) {
 		d.jetError(err, s, map[string]string{
 			"nozzle diameter": "diameter", "nozzle width": "long_side", "nozzle height": "short_side",
 			"design Mach number": "design_mach", "secondary diameter": "secondary_diameter", "nozzle kind": "kind",
+			"nozzle contour": "contour",
 		})
 		return
 	}

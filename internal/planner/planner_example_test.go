@@ -47,7 +47,7 @@ func ExampleNew() {
 		fmt.Printf("%s ch%d %5.1f° %s\n", s.ID, s.Channel, s.Polar/deg, s.Status)
 	}
 	// Output:
-	// arc A: radius 5.504 m (largest the room allows), first clear angle 12.0° from the downstream jet axis
+	// arc A: radius 5.504 m (largest the room allows), first clear angle 12.3° from the downstream jet axis
 	// A-01 ch1  20.0° ok
 	// A-02 ch2  40.0° ok
 	// A-03 ch3  60.0° ok
