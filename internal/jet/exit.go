@@ -60,25 +60,25 @@ const (
 // once its pressure has adjusted to ambient, which is what the plume
 // correlations use.
 type Exit struct {
-	Mach                  float64   // fully expanded Mach number Mj
-	ExitMach              float64   // Mach number in the nozzle exit plane
-	DesignMach            float64   // nozzle design Mach number (1 for convergent exits)
-	Velocity              float64   // fully expanded velocity Uj, m/s
-	StaticTemperature     float64   // fully expanded static temperature Tj, K
-	TotalTemperature      float64   // total temperature T0, K
-	Density               float64   // fully expanded density ρj, kg/m³
-	DensityRatio          float64   // ρj/ρa
-	Diameter              float64   // area-equivalent nozzle exit diameter D, m
-	FullyExpandedDiameter float64   // Dj from mass conservation, m
-	EffectiveDiameter     float64   // Thring–Newby Dj·sqrt(ρj/ρa), m
-	AcousticMach          float64   // Uj/a∞
-	Reynolds              float64   // ρj·Uj·Dj/μ(Tj)
+	Mach                  float64 // fully expanded Mach number Mj
+	ExitMach              float64 // Mach number in the nozzle exit plane
+	DesignMach            float64 // nozzle design Mach number (1 for convergent exits)
+	Velocity              float64 // fully expanded velocity Uj, m/s
+	StaticTemperature     float64 // fully expanded static temperature Tj, K
+	TotalTemperature      float64 // total temperature T0, K
+	Density               float64 // fully expanded density ρj, kg/m³
+	DensityRatio          float64 // ρj/ρa
+	Diameter              float64 // area-equivalent nozzle exit diameter D, m
+	FullyExpandedDiameter float64 // Dj from mass conservation, m
+	EffectiveDiameter     float64 // Thring–Newby Dj·sqrt(ρj/ρa), m
+	AcousticMach          float64 // Uj/a∞
+	Reynolds              float64 // ρj·Uj·Dj/μ(Tj)
 	// AmbientReynolds is Uj·D_eff/ν∞ = ρa·Uj·D_eff/μ(Ta): the Reynolds
 	// number of the mixed jet, whose momentum flux is that of an ambient-
 	// density jet of diameter D_eff and whose viscosity is the entrained
 	// air's. It decides laminar or turbulent: a hot jet's own viscosity
 	// would call a fast exhaust laminar.
-	AmbientReynolds float64
+	AmbientReynolds       float64
 	SlotReynolds          float64   // ρj·Uj·height/μ(Tj) for rectangular exits, 0 otherwise
 	ConvectiveMach        float64   // Uj/(aj + a∞), Papamoschou & Roshko 1988
 	SoundSpeed            float64   // aj, m/s

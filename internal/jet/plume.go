@@ -33,9 +33,9 @@ type Plume struct {
 	// layer's growth, (1 + sqrt(ρa/ρj))/2, never below 1: a light (hot)
 	// jet's mixing layer grows faster; a dense one's is not let shrink
 	lightLayer float64
-	buoy   Buoyancy
-	env    [2][2]Envelope // [zone-1][variant-1]
-	flags  []Flag
+	buoy       Buoyancy
+	env        [2][2]Envelope // [zone-1][variant-1]
+	flags      []Flag
 }
 
 // NewPlume predicts the plume of nozzle n at operating point c and bounds its
