@@ -164,6 +164,9 @@ func (d *decoder) obstacles(s *section, ci *cellInfo) {
 				}
 			}
 		}
+		if okShape && d.outsideCell(ci, fp, o, "obstacle") {
+			okShape = false
+		}
 		if okName && okShape && okFrom && okTo {
 			ci.cell.Obstacles = append(ci.cell.Obstacles, geometry.Obstacle{Name: name, Footprint: fp, ZMin: zMin, ZMax: zMax})
 		}
@@ -178,6 +181,9 @@ func (d *decoder) keepOuts(s *section, ci *cellInfo) {
 		k := d.section(it, index(s.field("keep_out"), i), it.Line, keepOutKeys)
 		name, okName := d.name(k, "keep-out zone", names)
 		fp, okShape := d.footprint(k)
+		if okShape && d.outsideCell(ci, fp, k, "keep-out zone") {
+			okShape = false
+		}
 		if okName && okShape {
 			ci.cell.KeepOuts = append(ci.cell.KeepOuts, geometry.KeepOut{Name: name, Footprint: fp})
 		}
@@ -244,4 +250,34 @@ func (d *decoder) marks(s *section, ci *cellInfo) {
 			ci.cell.Marks = append(ci.cell.Marks, geometry.Mark{Name: name, At: at})
 		}
 	}
+}
+
+// outsideCell reports, and records as a problem, a footprint of s (an
+// obstacle or a keep-out zone, what) that lies wholly outside a bounded
+// cell: it can block nothing, so it is a slip of a coordinate or a unit.
+func (d *decoder) outsideCell(ci *cellInfo, fp geometry.Footprint, s *section, what string) bool {
+	c := &ci.cell
+	if !ci.boundaryOK || !c.Bounded() {
+		return false
+	}
+	p := fp.Center
+	if !fp.IsCircle() {
+		p = fp.Ring[0]
+	}
+	if c.Contains(p) {
+		return false
+	}
+	if c.Extent().Intersects(fp.Bound()) {
+		for i := 0; i+1 < len(c.Boundary); i++ {
+			if fp.SegmentDistance(c.Boundary[i], c.Boundary[i+1]) == 0 {
+				return false // it crosses or holds the outline
+			}
+		}
+	}
+	key := "polygon"
+	if fp.IsCircle() {
+		key = "circle"
+	}
+	d.errorf(ErrInvalid, s.keyLine(key), s.field(key), "this %s lies wholly outside the cell's %s; check its coordinates and their unit", what, outlineName(ci))
+	return true
 }

@@ -139,15 +139,20 @@ func (d *decoder) titleSection(top *section) planner.Title {
 		{"prepared_by", &t.PreparedBy}, {"checked_by", &t.CheckedBy}, {"approved_by", &t.ApprovedBy}, {"date", &t.Date},
 	} {
 		if n := s.get(f.key); n != nil {
-			*f.dst, _ = d.text(n, s.field(f.key))
+			if v, ok := d.text(n, s.field(f.key)); ok && d.checkLabel(v, n.Line, s.field(f.key), MaxTextLength) {
+				if f.key != "date" || d.checkDate(v, n.Line, s.field(f.key)) {
+					*f.dst = v
+				}
+			}
 		}
 	}
 	if n := s.need("title", "the title of the sheet"); n != nil {
 		if v, ok := d.text(n, s.field("title")); ok {
 			if strings.TrimSpace(v) == "" {
 				d.errorf(ErrInvalid, n.Line, s.field("title"), "want the title of the sheet, got an empty text")
+			} else if d.checkLabel(v, n.Line, s.field("title"), MaxTextLength) {
+				t.Title = v
 			}
-			t.Title = v
 		}
 	}
 	return t

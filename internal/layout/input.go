@@ -7,6 +7,11 @@ import (
 	"io"
 	"io/fs"
 	"os"
+	"regexp"
+	"strconv"
+	"strings"
+	"time"
+	"unicode"
 	"unicode/utf8"
 
 	"go.yaml.in/yaml/v3"
@@ -117,17 +122,68 @@ func (d *decoder) checkText(data []byte) bool {
 	return true
 }
 
-// checkDepth records a map or list nested deeper than MaxDepth, at its
-// line, and reports whether there was none.
-func (d *decoder) checkDepth(n *yaml.Node, depth int) bool {
+// checkTree records, at its line, every value with a custom YAML tag
+// (!name) or a binary one, and a map or list nested deeper than MaxDepth;
+// it reports whether the nesting is within MaxDepth (the tree is not read
+// further otherwise).
+func (d *decoder) checkTree(n *yaml.Node, depth int) bool {
 	if depth > MaxDepth {
 		d.errorf(ErrSyntax, n.Line, "", "nested more than %d levels deep; a layout nests at most six", MaxDepth)
 		return false
 	}
+	if n.Style&yaml.TaggedStyle != 0 {
+		if t := n.ShortTag(); !strings.HasPrefix(t, "!!") || t == "!!binary" {
+			d.errorf(ErrSyntax, n.Line, "", "YAML tag %s is not supported; write the value plainly", n.Tag)
+		}
+	}
 	for _, c := range n.Content {
-		if !d.checkDepth(c, depth+1) {
+		if !d.checkTree(c, depth+1) {
 			return false
 		}
+	}
+	return true
+}
+
+// checkLabel records a text of the layout (a name, a title) that holds a
+// control character or a bidirectional override — they would reach the
+// terminal, the sheet and the exports — or is longer than max characters;
+// it reports whether there was no problem.
+func (d *decoder) checkLabel(v string, line int, field string, max int) bool {
+	for _, r := range v {
+		if unicode.IsControl(r) || (r >= 0x202A && r <= 0x202E) || (r >= 0x2066 && r <= 0x2069) {
+			d.errorf(ErrInvalid, line, field, "holds the character U+%04X (a control or text-direction character); write plain text on one line", r)
+			return false
+		}
+	}
+	if n := utf8.RuneCountInString(v); n > max {
+		d.errorf(ErrInvalid, line, field, "is %d characters long; want at most %d", n, max)
+		return false
+	}
+	return true
+}
+
+// isoDate matches a date written with numbers, which must then be a real
+// date: 2026-11-30, 2026/11/30 or 30.11.2026.
+var isoDate = regexp.MustCompile(`^(\d{4})[-/](\d{1,2})[-/](\d{1,2})$|^(\d{1,2})\.(\d{1,2})\.(\d{4})$`)
+
+// checkDate records a date written with numbers that is not a date of the
+// calendar (2026-13-45); other texts ("March 2026") are kept as written.
+func (d *decoder) checkDate(v string, line int, field string) bool {
+	m := isoDate.FindStringSubmatch(strings.TrimSpace(v))
+	if m == nil {
+		return true
+	}
+	y, mo, day := m[1], m[2], m[3]
+	if y == "" {
+		y, mo, day = m[6], m[5], m[4]
+	}
+	yi, _ := strconv.Atoi(y) // digits only, by the pattern
+	mi, _ := strconv.Atoi(mo)
+	di, _ := strconv.Atoi(day)
+	t := time.Date(yi, time.Month(mi), di, 0, 0, 0, 0, time.UTC)
+	if mi < 1 || mi > 12 || t.Day() != di {
+		d.errorf(ErrInvalid, line, field, "%q is not a date of the calendar; want year-month-day, such as 2026-11-30", v)
+		return false
 	}
 	return true
 }

@@ -97,7 +97,7 @@ func (d *decoder) parse(data []byte) *yaml.Node {
 		d.errorf(ErrSyntax, 0, "", noLayout)
 		return nil
 	}
-	if !d.checkDepth(root, 1) {
+	if !d.checkTree(root, 1) {
 		return nil
 	}
 	return root

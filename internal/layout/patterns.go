@@ -63,8 +63,10 @@ func (d *decoder) angleRange(s *section, key string, hi float64, hiText string) 
 		// the last station falls short of "to" when the span is not a
 		// whole number of steps
 		span := math.Abs(to - from)
-		if k := math.Floor(span/step + 1e-6); span-k*step > 1e-6*step {
-			last := from + math.Copysign(k*step, to-from)
+		k := math.Floor(span/step + 1e-6)
+		last := from + math.Copysign(k*step, to-from)
+		// no warning when the shortfall does not show at the printed 0.1°
+		if span-k*step > 1e-6*step && units.FormatAngleDeg(last) != units.FormatAngleDeg(to) {
 			d.warnf(r.line, r.field("to"), "the steps from %s by %s stop at %s, short of %s", units.FormatAngleDeg(from), units.FormatAngleDeg(step), units.FormatAngleDeg(last), units.FormatAngleDeg(to))
 		}
 	}
@@ -279,6 +281,8 @@ func (d *decoder) fixed(s *section, key string, a *planner.Array, ac *arrayConte
 			if f.Name, okN = d.text(n, p.field("name")); okN && f.Name == "" {
 				d.errorf(ErrInvalid, n.Line, p.field("name"), "want a name, got an empty text (leave the key out to number the station after the array)")
 				okN = false
+			} else if okN {
+				okN = d.checkLabel(f.Name, n.Line, p.field("name"), MaxNameLength)
 			}
 			if okN {
 				ac.stations.add(f.Name, n.Line, p.field("name"))

@@ -176,6 +176,9 @@ func (d *decoder) name(s *section, what string, set *nameSet) (string, bool) {
 		d.errorf(ErrInvalid, n.Line, s.field("name"), "want a name for this %s, got an empty text", what)
 		return "", false
 	}
+	if !d.checkLabel(v, n.Line, s.field("name"), MaxNameLength) {
+		return "", false
+	}
 	if set != nil {
 		set.add(v, n.Line, s.field("name"))
 	}
