@@ -95,7 +95,7 @@ func runAir(o *AirOptions, fs *pflag.FlagSet, args []string, w io.Writer) error 
 		}
 		plan, err := planner.New(req)
 		if err != nil {
-			return fmt.Errorf("%s: %w", args[0], err)
+			return layout.Locate(req, err)
 		}
 		tab = airFromPlan(plan)
 	} else {

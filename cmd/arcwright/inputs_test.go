@@ -219,3 +219,28 @@ func TestInitDanglingLink(t *testing.T) {
 		t.Errorf("init /dev/zero: got exit %d, want %d", code, exitUsage)
 	}
 }
+
+// TestValidateRefusesWhatPlanRefuses checks that each unplannable layout
+// fails validate with the same located error that plan gives (issue 10,
+// item 7: validate said valid and plan failed without file, line or key).
+func TestValidateRefusesWhatPlanRefuses(t *testing.T) {
+	files, err := filepath.Glob("../../testdata/layouts/unplannable/*.yaml")
+	if err != nil || len(files) == 0 {
+		t.Fatalf("no unplannable layouts: %v", err)
+	}
+	for _, path := range files {
+		t.Run(filepath.Base(path), func(t *testing.T) {
+			out, vErr, vCode := arc(t, "validate", path)
+			_, pErr, pCode := arc(t, "plan", path, "--csv", filepath.Join(t.TempDir(), "x.csv"))
+			if vCode != exitError || pCode != exitError {
+				t.Errorf("validate exit %d, plan exit %d, want 1 and 1", vCode, pCode)
+			}
+			if strings.Contains(out, "valid") {
+				t.Errorf("validate said %q", out)
+			}
+			if vErr != pErr || !strings.HasPrefix(vErr, path+":") {
+				t.Errorf("validate said %q, plan said %q, want the same located error", vErr, pErr)
+			}
+		})
+	}
+}

@@ -147,7 +147,7 @@ func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error)
 		return nil, fmt.Errorf("%s: %w", asBuilt, err)
 	}
 	if err != nil {
-		return nil, fmt.Errorf("%s: %w", path, err)
+		return nil, layout.Locate(req, err)
 	}
 	return p, nil
 }
@@ -191,7 +191,7 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	}
 	// every file is written to a temporary first: a failure leaves none
 	if err := export.WriteFiles(outs, ins, w); err != nil {
-		return err
+		return layout.Locate(p.Request, err)
 	}
 	switch {
 	case toStdout:

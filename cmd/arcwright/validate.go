@@ -7,8 +7,10 @@ import (
 
 	"github.com/spf13/cobra"
 
+	"arcwright/internal/export"
 	"arcwright/internal/layout"
 	"arcwright/internal/planner"
+	"arcwright/internal/sheet"
 	"arcwright/internal/units"
 )
 
@@ -21,6 +23,11 @@ reference in it, and print a short summary: the cell, the nozzle, the
 operating points and the arrays with the stations they ask for. Every problem
 found is printed with its file, line and key, all of them in one run.
 
+The stations are then placed and checked, and the sheet and the exports
+made, as 'arcwright plan' does, so that a layout that validates also plans:
+an automatic radius that fits nowhere or a station ID used twice is reported
+here, at its line and key.
+
 Every command that reads a layout checks it the same way first.
 
 Exit status: 0 when the layout is valid, 1 otherwise, 2 on a bad command line.`,
@@ -30,9 +37,33 @@ Exit status: 0 when the layout is valid, 1 otherwise, 2 on a bad command line.`,
 			if err != nil {
 				return err
 			}
+			if err := planCheck(req); err != nil {
+				return err
+			}
 			return summary(stdout, req, warnings)
 		},
 	}
+}
+
+// planCheck plans req and writes the sheet and every export to nowhere,
+// so that validate refuses whatever plan would refuse, at the line and key
+// of the layout.
+func planCheck(req *planner.Request) error {
+	p, err := planner.New(req)
+	if err != nil {
+		return layout.Locate(req, err)
+	}
+	for _, write := range []func(io.Writer) error{
+		func(w io.Writer) error { return sheet.Write(w, p, sheet.Options{}) },
+		func(w io.Writer) error { return export.CSV(w, p) },
+		func(w io.Writer) error { return export.JSON(w, p) },
+		func(w io.Writer) error { return export.GeoJSON(w, p) },
+	} {
+		if err := write(io.Discard); err != nil {
+			return layout.Locate(req, err)
+		}
+	}
+	return nil
 }
 
 // summary prints what a layout holds.
