@@ -68,6 +68,41 @@ type Cell struct {
 	KeepOuts       []KeepOut
 	Collector      *Collector // nil if none
 	Marks          []Mark
+
+	// walls indexes a large Boundary, built by the first query that needs
+	// it (see Cell.walls).
+	wallIndex *ringIndex
+}
+
+// walls returns the index of the boundary's edges, building it on first
+// use, or nil for a boundary of fewer than ringIndexMin vertices or with a
+// non-finite coordinate (searched edge by edge). The index is rebuilt when
+// Boundary is assigned a different ring; a ring edited in place after the
+// first query is not seen, and a Cell must not be queried from several
+// goroutines at once until its first query has returned.
+func (c *Cell) walls() *ringIndex {
+	r := c.Boundary
+	if len(r) < ringIndexMin {
+		return nil
+	}
+	if ix := c.wallIndex; ix != nil && len(ix.ring) == len(r) && &ix.ring[0] == &r[0] {
+		return ix
+	}
+	if b := r.Bound(); !finite(b.Min[0]) || !finite(b.Min[1]) || !finite(b.Max[0]) || !finite(b.Max[1]) {
+		return nil
+	}
+	c.wallIndex = newRingIndex(r)
+	return c.wallIndex
+}
+
+// ringQuery returns the squared distance, m², from p to the boundary and
+// whether p is inside it by the even-odd rule (the package's ringQuery,
+// through the index for a large boundary).
+func (c *Cell) ringQuery(p orb.Point) (float64, bool) {
+	if ix := c.walls(); ix != nil {
+		return ix.query(p)
+	}
+	return ringQuery(c.Boundary, p)
 }
 
 // Bounded reports whether the cell has a boundary.
@@ -82,6 +117,9 @@ func (c *Cell) Contains(p orb.Point) bool {
 	}
 	if !c.Bounded() {
 		return true
+	}
+	if ix := c.walls(); ix != nil {
+		return ix.inside(p) || ix.touches(p)
 	}
 	d2, inside := ringQuery(c.Boundary, p)
 	return inside || d2 <= boundaryTol2
@@ -98,10 +136,14 @@ func (c *Cell) WallDistance(p orb.Point) float64 {
 	if !c.Bounded() {
 		return math.Inf(1)
 	}
-	if d := signedRingDistance(c.Boundary, p); d != 0 {
-		return -d
+	d2, inside := c.ringQuery(p)
+	switch {
+	case d2 <= boundaryTol2:
+		return 0
+	case inside:
+		return math.Sqrt(d2)
 	}
-	return 0 // not −0
+	return -math.Sqrt(d2)
 }
 
 // Extent returns the rectangle to draw, m: the bound of the boundary when
@@ -153,9 +195,15 @@ func (c *Cell) SegmentInside(a, b orb.Point) bool {
 	if !c.Contains(a) || !c.Contains(b) {
 		return false
 	}
-	for i := 0; i+1 < len(c.Boundary); i++ {
-		if segmentsCross(a, b, c.Boundary[i], c.Boundary[i+1]) {
+	if ix := c.walls(); ix != nil {
+		if ix.crossed(a, b) {
 			return false
+		}
+	} else {
+		for i := 0; i+1 < len(c.Boundary); i++ {
+			if segmentsCross(a, b, c.Boundary[i], c.Boundary[i+1]) {
+				return false
+			}
 		}
 	}
 	// both ends inside and no edge crossed: the segment can still leave

@@ -31,9 +31,10 @@ import (
 //     each other ([ErrSelfIntersecting], naming the two edges).
 //
 // Collinear consecutive vertices and either orientation are accepted.
-// The simplicity check compares every pair of edges, so its time grows as
-// the square of the number of vertices; outlines of a few hundred vertices
-// take well under a millisecond.
+// The simplicity check compares each edge only with the edges near it (a
+// tree of boxes over the ring), so for outlines whose consecutive edges lie
+// close together the time grows about linearly with the number of vertices
+// (BenchmarkCheckRing).
 func CheckRing(r orb.Ring) error {
 	if len(r) == 0 {
 		return fmt.Errorf("%w: the ring is empty, want at least 3 distinct vertices and the closing repeat", ErrTooFewVertices)
@@ -76,11 +77,21 @@ func CheckRing(r orb.Ring) error {
 }
 
 // checkSimple reports the first pair of edges of the closed ring r (n edges)
-// that touch or cross, other than neighbours meeting at their shared vertex.
+// that touch or cross, other than neighbours meeting at their shared vertex:
+// the pair (i, j), i < j, with the smallest i and then the smallest j. Each
+// edge is compared only with the edges in the leaves of a ringIndex whose
+// boxes its bound meets, so the time grows about as n·log n for
+// outlines whose consecutive edges lie close together.
 func checkSimple(r orb.Ring, n int) error {
+	ix := newRingIndex(r)
 	for i := range n {
 		a, b := r[i], r[i+1]
-		for j := i + 1; j < n; j++ {
+		q := orb.Bound{Min: a, Max: a}.Extend(b).Pad(indexPad)
+		first := -1
+		ix.near(q, func(j int) {
+			if j <= i || j >= n || (first >= 0 && j >= first) {
+				return
+			}
 			c, d := r[j], r[j+1]
 			neighbours := j == i+1 || (i == 0 && j == n-1)
 			var bad bool
@@ -95,9 +106,13 @@ func checkSimple(r orb.Ring, n int) error {
 					planar.DistanceFromSegmentSquared(c, d, b) <= boundaryTol2
 			}
 			if bad {
-				return fmt.Errorf("%w: edge %d-%d from (%g, %g) to (%g, %g) meets edge %d-%d from (%g, %g) to (%g, %g)",
-					ErrSelfIntersecting, i+1, i+2, a[0], a[1], b[0], b[1], j+1, j+2, c[0], c[1], d[0], d[1])
+				first = j
 			}
+		})
+		if j := first; j >= 0 {
+			c, d := r[j], r[j+1]
+			return fmt.Errorf("%w: edge %d-%d from (%g, %g) to (%g, %g) meets edge %d-%d from (%g, %g) to (%g, %g)",
+				ErrSelfIntersecting, i+1, i+2, a[0], a[1], b[0], b[1], j+1, j+2, c[0], c[1], d[0], d[1])
 		}
 	}
 	return nil
