@@ -156,10 +156,33 @@ func (ix *Index) Solid(i int) Solid { return ix.solids[i] }
 // the extended slice. It appends nothing when a coordinate is NaN or
 // infinite.
 func (ix *Index) AppendSegmentHits(dst []int, a, b r3.Vec) []int {
+	from := len(dst)
+	dst = ix.segmentHits(dst, a, b, -1, -1)
+	slices.Sort(dst[from:])
+	return dst
+}
+
+// AppendFirstSegmentHits appends to dst the indices of at most n solids
+// other than solid skip (−1 for none) that the 3-D segment from a to b
+// (cell frame, m) meets, the first found as the grid is walked
+// (deterministic, but not by index), and returns the extended slice. It
+// appends nothing when a coordinate is NaN or infinite. A query that needs
+// only the first few hits costs about the same however many solids the
+// segment passes through.
+func (ix *Index) AppendFirstSegmentHits(dst []int, a, b r3.Vec, n, skip int) []int {
+	if n <= 0 {
+		return dst
+	}
+	return ix.segmentHits(dst, a, b, n, skip)
+}
+
+// segmentHits appends the solids other than skip that segment ab meets, at
+// most n of them (all when n < 0), each once, in the order the grid is
+// walked.
+func (ix *Index) segmentHits(dst []int, a, b r3.Vec, n, skip int) []int {
 	if len(ix.solids) == 0 || !finiteVec(a) || !finiteVec(b) {
 		return dst
 	}
-	from := len(dst)
 	seg := orb.Bound{
 		Min: orb.Point{math.Min(a.X, b.X), math.Min(a.Y, b.Y)},
 		Max: orb.Point{math.Max(a.X, b.X), math.Max(a.Y, b.Y)},
@@ -167,11 +190,14 @@ func (ix *Index) AppendSegmentHits(dst []int, a, b r3.Vec) []int {
 	if !seg.Intersects(ix.grid) {
 		return dst
 	}
+	found := 0
 	// Solids already tested and missed, so that one spanning several grid
-	// cells is tested once; beyond its capacity a solid may be retested,
-	// which costs time but never changes the answer.
+	// cells is tested once (beyond its capacity a solid may be retested,
+	// which costs time but never changes the answer), and solids already
+	// reported, so that each is reported once.
 	var missed [64]int32
 	nmissed := 0
+	var reported seenSet
 	c0, c1 := ix.col(seg.Min[0]), ix.col(seg.Max[0])
 	for c := c0; c <= c1; c++ {
 		// The rows the segment crosses within this column's x range.
@@ -187,19 +213,24 @@ func (ix *Index) AppendSegmentHits(dst []int, a, b r3.Vec) []int {
 		for r := ix.row(ylo); r <= ix.row(yhi); r++ {
 			for _, id := range ix.cellItems(c, r) {
 				i := int(id)
-				if !ix.bounds[i].Intersects(seg) || slices.Contains(missed[:nmissed], id) || slices.Contains(dst[from:], i) {
+				if i == skip || !ix.bounds[i].Intersects(seg) || slices.Contains(missed[:nmissed], id) || reported.has(id) {
 					continue
 				}
-				if ix.solids[i].segmentHits(a, b, ix.bounds[i]) {
-					dst = append(dst, i)
-				} else if nmissed < len(missed) {
-					missed[nmissed] = id
-					nmissed++
+				if !ix.solids[i].segmentHits(a, b, ix.bounds[i]) {
+					if nmissed < len(missed) {
+						missed[nmissed] = id
+						nmissed++
+					}
+					continue
+				}
+				reported.add(id)
+				dst = append(dst, i)
+				if found++; found == n {
+					return dst
 				}
 			}
 		}
 	}
-	slices.Sort(dst[from:])
 	return dst
 }
 
@@ -244,3 +275,36 @@ func (ix *Index) AppendNear(dst []int, p orb.Point, radius float64) []int {
 
 // finiteVec reports whether every coordinate of v is finite.
 func finiteVec(v r3.Vec) bool { return finite(v.X) && finite(v.Y) && finite(v.Z) }
+
+// seenSet is a set of solid indices: a short list on the stack, then a map
+// when it grows. The zero value is empty.
+type seenSet struct {
+	few  [32]int32
+	n    int
+	many map[int32]bool
+}
+
+// has reports whether id is in the set.
+func (s *seenSet) has(id int32) bool {
+	if s.many != nil {
+		return s.many[id]
+	}
+	return slices.Contains(s.few[:s.n], id)
+}
+
+// add adds id, which is not in the set.
+func (s *seenSet) add(id int32) {
+	switch {
+	case s.many != nil:
+		s.many[id] = true
+	case s.n < len(s.few):
+		s.few[s.n] = id
+		s.n++
+	default:
+		s.many = make(map[int32]bool, 2*len(s.few))
+		for _, f := range s.few {
+			s.many[f] = true
+		}
+		s.many[id] = true
+	}
+}

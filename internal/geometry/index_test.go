@@ -195,3 +195,34 @@ func BenchmarkBruteSegmentHits(b *testing.B) {
 		}
 	}
 }
+
+// TestAppendFirstSegmentHits: the first n hits other than skip are hits of
+// the full query, distinct, at most n, and all of them when there are no
+// more than n.
+func TestAppendFirstSegmentHits(t *testing.T) {
+	rng := rand.New(rand.NewPCG(41, 42))
+	ix := NewIndex(randomSolids(rng, 300, 30, 20))
+	for k := range 200 {
+		a := r3.Vec{X: 30 * rng.Float64(), Y: 20 * rng.Float64(), Z: 2 * rng.Float64()}
+		b := r3.Vec{X: 30 * rng.Float64(), Y: 20 * rng.Float64(), Z: 2 * rng.Float64()}
+		all := ix.AppendSegmentHits(nil, a, b)
+		skip := -1
+		if len(all) > 0 {
+			skip = all[rng.IntN(len(all))]
+		}
+		want := slices.DeleteFunc(slices.Clone(all), func(i int) bool { return i == skip })
+		for _, n := range []int{1, 3, 1000} {
+			got := ix.AppendFirstSegmentHits(nil, a, b, n, skip)
+			if len(got) != min(n, len(want)) {
+				t.Fatalf("segment %d, n %d: got %d hits %v, want %d of %v", k, n, len(got), got, min(n, len(want)), want)
+			}
+			seen := map[int]bool{}
+			for _, i := range got {
+				if seen[i] || !slices.Contains(want, i) {
+					t.Fatalf("segment %d, n %d: got %v, want distinct hits from %v", k, n, got, want)
+				}
+				seen[i] = true
+			}
+		}
+	}
+}

@@ -3,6 +3,7 @@ package planner
 import (
 	"fmt"
 	"math"
+	"slices"
 	"strings"
 
 	"github.com/paulmach/orb"
@@ -402,10 +403,13 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	ck.finish(st, t)
 }
 
-// spacing checks the gap to the nearest other stand.
+// spacing checks the gap to the nearest other stand and counts the stands
+// that overlap this one (or come closer than the layout asks), so that a
+// crowd of stands gives one short reason, not a list.
 func (ck *checker) spacing(st *Station, i int) Check {
 	me := ck.feet[i]
 	best, who := math.Inf(1), -1
+	overlaps, close := 0, 0
 	var near []int
 	near = ck.stands.AppendNear(near[:0], me.at, me.r+ck.maxFoot+ck.lim.StandSpacing)
 	for _, j := range near {
@@ -417,6 +421,12 @@ func (ck *checker) spacing(st *Station, i int) Check {
 		if g < best {
 			best, who = g, j
 		}
+		switch {
+		case g < 0:
+			overlaps++
+		case g < ck.lim.StandSpacing:
+			close++
+		}
 	}
 	c := Check{Name: CheckSpacing, Value: best, Unit: "m", Verdict: OK}
 	if who < 0 {
@@ -425,9 +435,15 @@ func (ck *checker) spacing(st *Station, i int) Check {
 	}
 	other := ck.stands.Solid(who).Name
 	switch {
+	case overlaps > 1:
+		c.Verdict = Blocked
+		c.Reason = fmt.Sprintf("overlaps %d other stands, the stand of %s most, by %s", overlaps, other, ck.m(-best))
 	case best < 0:
 		c.Verdict = Blocked
 		c.Reason = fmt.Sprintf("overlaps the stand of %s by %s", other, ck.m(-best))
+	case close > 1:
+		c.Verdict = Warn
+		c.Reason = fmt.Sprintf("%d other stands closer than the %s the layout asks, the stand of %s nearest, at %s", close, ck.m(ck.lim.StandSpacing), other, ck.m(best))
 	case best < ck.lim.StandSpacing:
 		c.Verdict = Warn
 		c.Reason = fmt.Sprintf("%s from the stand of %s; the layout asks %s", ck.m(best), other, ck.m(ck.lim.StandSpacing))
@@ -437,45 +453,56 @@ func (ck *checker) spacing(st *Station, i int) Check {
 	return c
 }
 
+// sightNames is the number of blockers a sight-line reason names; more are
+// summarised as "and others".
+const sightNames = 3
+
 // sight checks the lines from points along the source region to the
-// microphone against obstacles and other stands.
+// microphone against the boundary, obstacles and other stands. It looks for
+// only the first few stands on each line, so a crowd of stands costs no
+// more than a few.
 func (ck *checker) sight(st *Station, i int) Check {
 	blocked := 0
 	by := map[string]bool{}
 	var names []string
+	more := false
+	name := func(n string) {
+		if by[n] {
+			return
+		}
+		if len(names) == sightNames {
+			more = true
+			return
+		}
+		by[n] = true
+		names = append(names, n)
+	}
 	var hits []int
 	cell := &ck.req.Cell
 	for _, s := range ck.sources {
 		hit := false
 		if !cell.SegmentInside(orb.Point{s.X, s.Y}, orb.Point{st.Mic.X, st.Mic.Y}) {
 			hit = true
-			if n := "the " + ck.boundaryName(); !by[n] {
-				by[n] = true
-				names = append(names, n)
-			}
+			name("the " + ck.boundaryName())
 		}
 		hits = ck.obstacles.AppendSegmentHits(hits[:0], s, st.Mic)
 		for _, j := range hits {
 			hit = true
-			if n := ck.obstacles.Solid(j).Name; !by[n] {
-				by[n] = true
-				names = append(names, n)
-			}
+			name(ck.obstacles.Solid(j).Name)
 		}
-		hits = ck.stands.AppendSegmentHits(hits[:0], s, st.Mic)
+		hits = ck.stands.AppendFirstSegmentHits(hits[:0], s, st.Mic, sightNames+1, i)
+		slices.Sort(hits)
 		for _, j := range hits {
-			if j == i {
-				continue
-			}
 			hit = true
-			if n := "the stand of " + ck.stands.Solid(j).Name; !by[n] {
-				by[n] = true
-				names = append(names, n)
-			}
+			name("the stand of " + ck.stands.Solid(j).Name)
 		}
 		if hit {
 			blocked++
 		}
+	}
+	list := strings.Join(names, ", ")
+	if more {
+		list += " and others"
 	}
 	frac := 1 - float64(blocked)/float64(len(ck.sources))
 	c := Check{Name: CheckSight, Value: frac, Unit: "", Verdict: OK, Point: ck.srcPoint}
@@ -484,10 +511,10 @@ func (ck *checker) sight(st *Station, i int) Check {
 		c.Reason = "clear view of the source region"
 	case frac == 0:
 		c.Verdict = Blocked
-		c.Reason = "no view of the source region: hidden by " + strings.Join(names, ", ")
+		c.Reason = "no view of the source region: hidden by " + list
 	default:
 		c.Verdict = Warn
-		c.Reason = fmt.Sprintf("%d of %d sight lines to the source region pass through %s", blocked, len(ck.sources), strings.Join(names, ", "))
+		c.Reason = fmt.Sprintf("%d of %d sight lines to the source region pass through %s", blocked, len(ck.sources), list)
 	}
 	return c
 }
