@@ -49,7 +49,6 @@ sight to the source region, far field, floor reflection, air absorption,
 entrained inflow, buoyant plumes), and print a summary: stations ok, warned and
 blocked, the governing operating point, automatic radii, and what blocks what.
 
-<<<<<<< HEAD
 --pdf writes the floor layout sheet; --paper and --scale choose its paper and
 the plan's scale (ISO 5455 scales 1:1 to 1:5000 with 1:25 and 1:75; on a
 feet-and-inches sheet also the architect's 1/4" = 1'-0" and the engineer's
@@ -57,21 +56,15 @@ feet-and-inches sheet also the architect's 1/4" = 1'-0" and the engineer's
 stations, zones and nozzle. The sheet's date is the layout's title date;
 without one the sheet says "not dated" and the PDF carries the fixed date
 2000-01-01, so the same layout always gives the same bytes.
---csv, --json and --geojson write the
-exports. Files are only written when planning succeeds, each one whole or not
-at all. --format json prints the plan as JSON on standard output instead of
-the summary.
-=======
---pdf writes the floor layout sheet; --csv, --json and --geojson write the
-exports. Every destination is checked before planning: none may be the
-layout or another output, a directory or a device. The files are written all
-or none: each goes to a temporary file first, and they replace their
-targets only when every one was written (an existing file keeps its
-permissions; a symbolic link is kept and its target written). "-" writes
-that output to standard output instead of the summary; the null device
-discards it. --format json prints the plan as JSON on standard output
-instead of the summary.
->>>>>>> e2a66e7 (export: write a run's outputs all or none; refuse inputs, duplicates, directories and devices as destinations; keep modes and links; - is standard output; clean temporaries on signals)
+
+--csv, --json and --geojson write the exports. Every destination is checked
+before planning: none may be the layout or another output, a directory or a
+device. The files are written all or none: each goes to a temporary file
+first, and they replace their targets only when every one was written (an
+existing file keeps its permissions; a symbolic link is kept and its target
+written). "-" writes that output to standard output instead of the summary;
+the null device discards it. --format json prints the plan as JSON on
+standard output instead of the summary.
 
 Examples:
   arcwright plan layouts/anechoic-model-jet.yaml --pdf sheet.pdf
