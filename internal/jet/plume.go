@@ -134,6 +134,23 @@ func (p *Plume) CenterlineTemperature(x float64) float64 { return p.Temperature(
 // its centreline value, m (for x > 0).
 func (p *Plume) HalfVelocityRadius(x float64) float64 { return p.nom.rc(x) + p.nom.w(x) }
 
+// EdgeRadius returns the radius at x (m) where the mean velocity of the
+// given variant falls to the fraction frac (0 < frac < 1) of its centreline
+// value, m: for the conservative variant the larger of the conservative
+// field's edge, with its tail factor, and the nominal one. It is the width
+// of the plume that a collector must take. 0 for x < 0.
+func (p *Plume) EdgeRadius(v Variant, x, frac float64) float64 {
+	if x < 0 {
+		return 0
+	}
+	edge := func(f *field, tail float64) float64 { return f.rc(x) + tail*f.w(x)*f.su.inverse(frac) }
+	r := edge(&p.nom, 1)
+	if v == Conservative {
+		r = math.Max(r, edge(&p.cons, p.cons.m.Tail))
+	}
+	return r
+}
+
 // MixingLayer returns the nominal mixing layer at x.
 func (p *Plume) MixingLayer(x float64) MixingLayer {
 	f := &p.nom

@@ -60,14 +60,14 @@ func capture(req *Request, p *PointResult) (Verdict, string, float64) {
 	if q.X <= 0 {
 		return Blocked, fmt.Sprintf("the collector inlet is %s upstream of the nozzle exit", m(-q.X)), 0
 	}
-	// the nominal 5 % edge of the Gaussian profile: rc + w·sqrt(ln 20/ln 2)
-	half := p.Plume.HalfVelocityRadius(q.X)
-	core := p.Plume.MixingLayer(q.X).Inner
-	edge := core + (half-core)*math.Sqrt(math.Log(1/plumeEdgeFraction)/math.Ln2)
+	// the conservative field's 5 % edge: a capture judged on the nominal
+	// plume (which carries only part of the exit momentum) would call a
+	// spilling hood clear, and silence the warnings downstream of it
+	edge := p.Plume.EdgeRadius(jet.Conservative, q.X, plumeEdgeFraction)
 	d := 2 * edge
 	need := 2 * (edge + q.R) // the inlet centre may sit off the axis
 	ratio := need / col.Diameter
-	desc := fmt.Sprintf("plume %s wide (5 %% velocity edge) at the inlet %s downstream, collector %s", m(d), m(q.X), m(col.Diameter))
+	desc := fmt.Sprintf("plume %s wide (5 %% velocity edge, conservative) at the inlet %s downstream, collector %s", m(d), m(q.X), m(col.Diameter))
 	if q.R > 0.001 {
 		desc += fmt.Sprintf(", inlet %s off the axis", m(q.R))
 	}
