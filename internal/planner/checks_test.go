@@ -113,22 +113,26 @@ func TestInflow(t *testing.T) {
 	}
 }
 
-// TestCapture checks collector capture: the nominal 5 % velocity edge
-// (2.0789 r½ for a Gaussian, reference sheet §11, DERIVED) against the
-// inlet, ok below the inlet diameter, warn up to 1.25 times, blocked above.
+// TestCapture checks collector capture: the conservative 5 % velocity
+// edge, never narrower than the nominal one (2.0789 r½ for a Gaussian,
+// reference sheet §11, DERIVED), against the inlet: ok below the inlet
+// diameter, warn up to 1.25 times, blocked above.
 func TestCapture(t *testing.T) {
 	for _, tt := range []struct {
 		diameter float64
 		want     Verdict
-	}{{3, OK}, {1.0, Warn}, {0.4, Blocked}} {
+	}{{3, OK}, {1.3, Warn}, {0.4, Blocked}} {
 		req := point(r3.Vec{X: 6, Y: 7, Z: 1.5})
 		req.Cell.Collector = &geometry.Collector{Inlet: r3.Vec{X: 8, Y: 5, Z: 1.5}, Diameter: tt.diameter}
 		p := mustPlan(t, req)
 		pt := p.Points[0]
 		x := 3.0
-		edge := 2 * 2.0789 * pt.Plume.HalfVelocityRadius(x) // past the core: rc = 0
+		edge := 2 * pt.Plume.EdgeRadius(jet.Conservative, x, 0.05)
 		if math.Abs(pt.CaptureDiameter-edge) > 1e-3 {
 			t.Errorf("plume width %.4f, want %.4f", pt.CaptureDiameter, edge)
+		}
+		if nominal := 2 * 2.0789 * pt.Plume.HalfVelocityRadius(x); edge < nominal { // past the core: rc = 0
+			t.Errorf("conservative plume width %.4f is less than the nominal %.4f", edge, nominal)
 		}
 		if pt.Capture != tt.want {
 			t.Errorf("collector %g m (plume %.3f m): got %v, want %v: %s", tt.diameter, edge, pt.Capture, tt.want, pt.CaptureReason)
