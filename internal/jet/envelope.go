@@ -194,7 +194,13 @@ func newEnvelope(z Zone, v Variant, limit, length float64, radius func(float64) 
 // smooth means smooth everywhere.
 func newEnvelopePeak(z Zone, v Variant, limit, length float64, radius func(float64) float64, peak *[2]float64, smooth func(float64) bool, kinks ...float64) Envelope {
 	e := Envelope{Zone: z, Variant: v, Limit: limit, radius: radius}
-	if !(length > 0) || math.IsInf(length, 0) {
+	if math.IsNaN(length) || math.IsInf(length, 0) {
+		// not "no zone": NewPlume refuses a prediction with a non-finite
+		// number in it
+		e.Length = length
+		return e
+	}
+	if !(length > 0) {
 		return e
 	}
 	e.Length = length

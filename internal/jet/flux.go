@@ -196,7 +196,7 @@ func (f *field) buildFloor(e Exit, a Ambient) {
 func (f *field) floor(x float64) float64 {
 	n := len(f.floorX)
 	switch {
-	case n == 0 || x <= 0:
+	case n == 0 || !(x > 0):
 		return 0
 	case x > f.floorX[n-1]:
 		// past the table the spreading law carries the fluxes; the floor

@@ -257,3 +257,34 @@ func TestPipeExitDecaysMoreSlowly(t *testing.T) {
 		t.Error("a convergent-divergent pipe was accepted")
 	}
 }
+
+// TestOverflowIsAnErrorNotNoZone is the reported safety defect: absurd
+// inputs made the model overflow, the zone got length 0 and a probe on the
+// axis was "ok". Every such prediction must be refused.
+func TestOverflowIsAnErrorNotNoZone(t *testing.T) {
+	a := StandardAmbient()
+	for _, tc := range []struct {
+		name string
+		n    Nozzle
+		c    Condition
+	}{
+		{"NPR 1e305", Nozzle{Kind: Convergent, Diameter: 0.05}, Condition{Primary: Stream{NPR: 1e305, TemperatureRatio: 1}, Ambient: a}},
+		{"NPR 1e304", Nozzle{Kind: Convergent, Diameter: 0.05}, Condition{Primary: Stream{NPR: 1e304, TemperatureRatio: 1}, Ambient: a}},
+		{"diameter 1e200 m", Nozzle{Kind: Convergent, Diameter: 1e200}, Condition{Primary: Stream{NPR: 1.5, TemperatureRatio: 1}, Ambient: a}},
+		{"secondary NPR 1e100", Nozzle{Kind: Coaxial, Diameter: 0.05, SecondaryDiameter: 0.1},
+			Condition{Primary: Stream{NPR: 1.5, TemperatureRatio: 2}, Secondary: &Stream{NPR: 1e100, TemperatureRatio: 1}, Ambient: a}},
+		{"temperature ratio 1e300", Nozzle{Kind: Convergent, Diameter: 0.05}, Condition{Primary: Stream{NPR: 1.5, TemperatureRatio: 1e300}, Ambient: a}},
+	} {
+		p, err := NewPlume(tc.n, tc.c, DefaultLimits())
+		if err != nil {
+			continue
+		}
+		// accepted: then every zone must be a real, finite zone
+		if err := p.finite(); err != nil {
+			t.Errorf("%s: accepted with %v", tc.name, err)
+		}
+		if l := p.Envelope(VelocityZone, Conservative).Length; !(l > 0) {
+			t.Errorf("%s: accepted with a velocity zone of length %v", tc.name, l)
+		}
+	}
+}

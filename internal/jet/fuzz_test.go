@@ -15,6 +15,11 @@ func FuzzPlume(f *testing.F) {
 	f.Add(uint8(3), 0.1, 0.0, 0.0, 1.6, 700.0, 1.35, 288.0, 1.4, 310.0, 101325.0, 288.15, 5.0, 323.15)
 	f.Add(uint8(0), 0.001, 0.0, 0.0, 1.0001, 290.0, 1.4, 287.05, 1.0, 300.0, 101325.0, 288.15, 0.1, 289.0)
 	f.Add(uint8(0), 5.0, 0.0, 0.0, 60.0, 2500.0, 1.2, 300.0, 1.0, 300.0, 101325.0, 320.0, 50.0, 330.0)
+	// the two seeds with which this target found zones that vanished on
+	// overflow ("Dj = +Inf" at NPR 1e305, "Mj = NaN" at T0 = 1e300 K):
+	// both must now be refused
+	f.Add(uint8(0), 0.05, 0.0, 0.0, 1e305, 288.15, 1.4, 287.05, 1.3, 300.0, 101325.0, 288.15, 5.0, 323.15)
+	f.Add(uint8(0), 0.05, 0.0, 0.0, 1.5, 1e300, 1.4, 287.05, 1.3, 300.0, 101325.0, 288.15, 5.0, 323.15)
 	f.Fuzz(func(t *testing.T, kind uint8, d, md, ar, npr, t0, gamma, r, npr2, t02, pa, ta, ulim, tlim float64) {
 		n := Nozzle{Kind: Kind(kind%4 + 1), Diameter: d, DesignMach: md}
 		c := Condition{Primary: Stream{NPR: npr, TotalTemperature: t0, Gas: Gas{Gamma: gamma, R: r}}, Ambient: Ambient{Pressure: pa, Temperature: ta}}
@@ -30,7 +35,7 @@ func FuzzPlume(f *testing.F) {
 			return
 		}
 		e := p.Exit()
-		for name, v := range map[string]float64{"Mj": e.Mach, "Uj": e.Velocity, "Tj": e.StaticTemperature, "ρj": e.Density, "Dj": e.FullyExpandedDiameter, "Deff": e.EffectiveDiameter, "Re": e.Reynolds, "Mc": e.ConvectiveMach} {
+		for name, v := range map[string]float64{"Mj": e.Mach, "Uj": e.Velocity, "Tj": e.StaticTemperature, "ρj": e.Density, "Dj": e.FullyExpandedDiameter, "Deff": e.EffectiveDiameter, "Re": e.Reynolds, "Re∞": e.AmbientReynolds, "Mc": e.ConvectiveMach} {
 			if math.IsNaN(v) || math.IsInf(v, 0) || v < 0 {
 				t.Fatalf("exit %s = %v", name, v)
 			}

@@ -63,6 +63,11 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 			lim.Temperature, c.Ambient.Temperature)}
 	}
 	p := &Plume{nozzle: n, cond: c, exit: e, limits: lim}
+	// an exit state that overflowed is refused before any field is built
+	// on it (the zones are checked again once they are)
+	if err := p.finite(); err != nil {
+		return nil, err
+	}
 	laminar := e.AmbientReynolds < laminarRoundRe
 	p.nom = newField(nominal, n, e, c.Ambient, laminar)
 	p.cons = newField(conservative, n, e, c.Ambient, false)
@@ -81,8 +86,73 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 	br := RAir * c.Ambient.Temperature / (e.Gas.R * e.TotalTemperature)
 	p.buoy = buoyancyOf(e.DensityRatio, br, e.Velocity, math.Pi*e.FullyExpandedDiameter*e.FullyExpandedDiameter/4)
 	p.buildEnvelopes()
+	if err := p.finite(); err != nil {
+		return nil, err
+	}
 	p.flags = p.regimeFlags()
 	return p, nil
+}
+
+// finite returns an error naming the first number of the prediction that is
+// not finite: a zone whose size overflowed must never read as no zone.
+func (p *Plume) finite() error {
+	e := p.exit
+	vals := []struct {
+		name string
+		v    float64
+	}{
+		{"fully expanded Mach number", e.Mach}, {"jet velocity", e.Velocity},
+		{"static temperature", e.StaticTemperature}, {"jet density", e.Density},
+		{"density ratio", e.DensityRatio}, {"fully expanded diameter", e.FullyExpandedDiameter},
+		{"effective diameter", e.EffectiveDiameter}, {"mass flow", e.MassFlow}, {"thrust", e.Thrust},
+		{"Reynolds number", e.Reynolds}, {"ambient-viscosity Reynolds number", e.AmbientReynolds},
+		{"convective Mach number", e.ConvectiveMach}, {"exit pressure", e.ExitPressure},
+		{"shock-cell spacing", e.ShockCellSpacingUpper}, {"Mach-disk distance", e.MachDiskDistance},
+		{"nominal potential core", p.nom.lc}, {"conservative potential core", p.cons.lc},
+		{"momentum length", finiteOrInf(p.buoy.MomentumLength)},
+	}
+	for z := range p.env {
+		for v := range p.env[z] {
+			en := &p.env[z][v]
+			what := en.Variant.String() + " " + en.Zone.String()
+			vals = append(vals,
+				struct {
+					name string
+					v    float64
+				}{what + " length", en.Length},
+				struct {
+					name string
+					v    float64
+				}{what + " width", en.MaxRadius},
+				struct {
+					name string
+					v    float64
+				}{what + " outline tolerance", en.Tolerance})
+			for _, pt := range en.Points {
+				if bad(pt[0]) || bad(pt[1]) {
+					return &InputError{Field: "operating point", Reason: fmt.Sprintf("gives a %s outline that is not finite: the inputs are outside what the plume model can compute", what)}
+				}
+			}
+		}
+	}
+	for _, x := range vals {
+		if bad(x.v) {
+			return &InputError{Field: "operating point", Reason: fmt.Sprintf("gives a %s of %v: the inputs are outside what the plume model can compute", x.name, x.v)}
+		}
+	}
+	return nil
+}
+
+// bad reports whether v is NaN or infinite.
+func bad(v float64) bool { return math.IsNaN(v) || math.IsInf(v, 0) }
+
+// finiteOrInf maps +Inf (a neutral jet's momentum length: no bending) to 0
+// for the finiteness check and keeps every other value.
+func finiteOrInf(v float64) float64 {
+	if math.IsInf(v, 1) {
+		return 0
+	}
+	return v
 }
 
 // Exit returns the fully expanded exit state.
