@@ -104,7 +104,7 @@ func (v *planView) arrays() {
 		case planner.Ring:
 			c := v.t.pt(ar.Centre.X, ar.Centre.Y)
 			v.callouts = append(v.callouts, callout{
-				text:   "ring " + ar.Name + " radius " + pr.short(ar.Radius) + " about the axis",
+				text:   "ring " + ar.Name + " radius " + pr.dim(ar.Radius) + " about the axis",
 				anchor: c, dir: Pt{0.3, -1}, clear: 1.5, far: []float64{3, 6, 10, 15, 22, 30},
 				kind: DimensionLabel, of: ar.Name,
 			})
@@ -128,7 +128,7 @@ func (v *planView) arcDims(ar *planner.ArrayResult, ss []*planner.Station) {
 		v.shapes = append(v.shapes, arrow(StyleDim, from, to, 1.4)...)
 		m := lerp(c, mp, 0.55)
 		v.callouts = append(v.callouts, callout{
-			text:   "R " + pr.short(ar.Radius),
+			text:   "R " + pr.dim(ar.Radius),
 			note:   "arc " + ar.Name + " radius " + pr.length(ar.Radius),
 			anchor: m, dir: perp(unit(sub(mp, c), Pt{1, 0})), clear: 0.4, far: []float64{2, 4, 7},
 			kind: DimensionLabel, of: ar.Name,
@@ -167,7 +167,7 @@ func (v *planView) centreCallouts() {
 			what = "arcs " + joinAnd(c.names) + " centre"
 		}
 		cs = append(cs, callout{
-			text:   what + ": X " + pr.short(c.x) + ", Y " + pr.short(c.y) + " from datum",
+			text:   what + ": X " + pr.dim(c.x) + ", Y " + pr.dim(c.y) + " from datum",
 			anchor: c.anchor, dir: c.dir, clear: 1.6, far: []float64{3, 6, 10, 15, 22, 30, 40},
 			kind: DimensionLabel, of: strings.Join(c.names, ","),
 		})
@@ -247,7 +247,7 @@ func (v *planView) lineDims(ar *planner.ArrayResult, ss []*planner.Station) {
 	v.shapes = append(v.shapes, arrow(StyleDim, lerp(a, e, 0.5), e, 1.3)...)
 	v.shapes = append(v.shapes, arrow(StyleDim, lerp(a, e, 0.5), a, 1.3)...)
 	v.callouts = append(v.callouts, callout{
-		text:   "line " + ar.Name + " offset " + v.b.pr.short(ar.Radius) + " from axis",
+		text:   "line " + ar.Name + " offset " + v.b.pr.dim(ar.Radius) + " from axis",
 		anchor: lerp(a, e, 0.5), dir: perp(d), clear: 0.4, far: []float64{2, 5, 9, 14},
 		kind: DimensionLabel, of: ar.Name,
 	})

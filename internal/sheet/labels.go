@@ -195,12 +195,12 @@ func (v *planView) featureLabels() {
 	if col := c.Collector; col != nil {
 		s, co := math.Sincos(col.Heading)
 		p := v.t.pt(col.Inlet.X, col.Inlet.Y)
-		v.placeText("collector inlet Ø "+pr.short(col.Diameter), FeatureLabel, "collector", sizeSmall, p, Pt{-s, -co}, v.t.mm(col.Diameter/2)+0.5, featFar)
+		v.placeText("collector inlet Ø "+pr.dim(col.Diameter), FeatureLabel, "collector", sizeSmall, p, Pt{-s, -co}, v.t.mm(col.Diameter/2)+0.5, featFar)
 	}
 	fr := b.req.Exit
 	e := v.t.pt(fr.Exit.X, fr.Exit.Y)
 	s, co := math.Sincos(fr.Heading)
-	txt := "nozzle exit: X " + pr.short(fr.Exit.X) + ", Y " + pr.short(fr.Exit.Y) + ", axis " + pr.short(fr.Exit.Z) + " above floor"
+	txt := "nozzle exit: X " + pr.dim(fr.Exit.X) + ", Y " + pr.dim(fr.Exit.Y) + ", axis " + pr.dim(fr.Exit.Z) + " above floor"
 	if !v.placeText(txt, FeatureLabel, "nozzle", sizeSmall, e, Pt{-s, -co}, 1.5, []float64{3, 6, 10, 15, 22, 30, 40, 55}) {
 		v.notes = append(v.notes, txt+".")
 	}

@@ -87,7 +87,7 @@ func (b *builder) legendEntries() []legendEntry {
 	add(func(r Rect) []Shape {
 		a, z := mid(r)
 		return []Shape{line(StyleGrid, a, z), line(StyleGrid, Pt{r.X + 4, r.Y}, Pt{r.X + 4, r.Bottom()})}
-	}, "grid "+pr.length(b.gridStep)+" from datum")
+	}, "grid "+trimNum(b.gridStep/unitLen(b.req.Units))+" "+unitSym(b.req.Units)+" from datum")
 	return e
 }
 

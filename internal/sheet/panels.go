@@ -35,7 +35,7 @@ func (b *builder) scaleStrip(pg *Page, vf Rect) {
 	b.model.ScaleBar = bar
 	x := bar.X + bar.LengthMM + 12
 	pg.Texts = append(pg.Texts, b.text(x, bar.Y+2.2, 7, true, fmt.Sprintf("PLAN   Scale %s on %s — do not scale a print at another size", ScaleName(b.model.Scale, b.req.Units), b.model.Paper.Name)))
-	caption := fmt.Sprintf("Scale bar %s. Grid %s from the datum. %s", bar.Label, b.pr.length(b.gridStep), b.drawnWhat())
+	caption := fmt.Sprintf("Scale bar %s. Grid %s from the datum. %s", bar.Label, trimNum(b.gridStep/unitLen(b.req.Units))+" "+unitSym(b.req.Units), b.drawnWhat())
 	for i, l := range b.m.wrap(clean(caption), vf.Right()-x, sizeSmall, false) {
 		pg.Texts = append(pg.Texts, Text{X: x, Y: bar.Y + 5.6 + float64(i)*lineHeight(sizeSmall), Size: sizeSmall, Text: l})
 	}

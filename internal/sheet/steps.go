@@ -9,6 +9,7 @@ import (
 
 	"arcwright/internal/geometry"
 	"arcwright/internal/planner"
+	"arcwright/internal/units"
 )
 
 // steps returns the set-up steps in words, specific to the plan.
@@ -36,12 +37,16 @@ func (b *builder) steps() []textLine {
 	}
 
 	step("Nozzle exit and jet axis")
+	// a round distance in the sheet's unit: 5 m, or 20 ft
 	far := 5.0
+	if !pr.metric() {
+		far = 20 * units.Foot
+	}
 	p5 := fr.ToCell(geometry.JetPoint{X: far})
 	say("The nozzle exit centre is above the floor point X %s, Y %s, at %s above the floor. The jet axis is horizontal, heading %s from +X (counter-clockwise seen from above).",
 		pr.length(fr.Exit.X), pr.length(fr.Exit.Y), pr.length(fr.Exit.Z), degSign(fr.Heading))
-	say("Snap the axis on the floor from the point under the exit to X %s, Y %s (%s downstream); check it by plumb from the nozzle centre.",
-		pr.length(p5.X), pr.length(p5.Y), pr.length(far))
+	say("%s from the point under the exit to X %s, Y %s (%s downstream); check it by plumb from the nozzle centre.",
+		b.markLine("Mark the axis on the floor"), pr.length(p5.X), pr.length(p5.Y), pr.length(far))
 
 	for i := range b.plan.Arrays {
 		ar := &b.plan.Arrays[i]
@@ -125,16 +130,25 @@ func (b *builder) lineSteps(ar *planner.ArrayResult, ss []*planner.Station, say 
 	if first.Jet.Azimuth > math.Pi/2 && first.Jet.Azimuth < 3*math.Pi/2 {
 		side = "right"
 	}
-	say("Snap a chalk line parallel to the jet axis, %s to the %s of the axis (looking downstream), from X %s, Y %s to X %s, Y %s.",
-		pr.length(ar.Radius), side, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(last.Mic.X), pr.length(last.Mic.Y))
+	say("%s parallel to the jet axis, %s to the %s of the axis (looking downstream), from X %s, Y %s to X %s, Y %s.",
+		b.markLine("Mark a line on the floor"), pr.length(ar.Radius), side, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(last.Mic.X), pr.length(last.Mic.Y))
 	say("Mark %s at X %s, Y %s (%s downstream of the exit plane), then along the line: %s.",
 		first.ID, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(first.Jet.X), strings.Join(runs(ss, spacingAlong(ss), pr), "; "))
 	b.heightSteps(ss, say)
 }
 
-// heightSteps gives the microphone heights.
+// heightSteps gives the microphone heights; microphones flush on the
+// floor need none.
 func (b *builder) heightSteps(ss []*planner.Station, say func(string, ...any)) {
 	pr := b.pr
+	flush := true
+	for _, s := range ss {
+		flush = flush && s.Stand == nil && s.Height < 0.005
+	}
+	if flush {
+		say("The microphones lie flush on the floor: no heights to set.")
+		return
+	}
 	hs := make([]float64, len(ss))
 	for i, s := range ss {
 		hs[i] = s.Height
@@ -183,17 +197,24 @@ func (b *builder) aimSteps(ss []*planner.Station, say func(string, ...any)) {
 	}
 	for _, g := range gs {
 		who := "each microphone"
-		if len(gs) > 1 {
+		if len(gs) > 1 || g.ids[0].Kind == planner.Probes {
 			who = idRange(g.ids)
 		}
 		where := fmt.Sprintf("X %s, Y %s, height %s", pr.length(g.at.X), pr.length(g.at.Y), pr.length(g.at.Z))
 		if r3.Norm(r3.Sub(g.at, b.req.Exit.Exit)) < 1e-3 {
 			where += " (the nozzle exit centre)"
 		}
-		if g.inc == planner.GrazingIncidence {
+		probe := g.ids[0].Kind == planner.Probes
+		flush := g.ids[0].Stand == nil && g.ids[0].Height < 0.005
+		switch {
+		case probe:
+			say("Set %s as its own procedure says: the plan checks its clearance, not its aim.", who)
+		case flush:
+			say("Lay %s flat on the floor, diaphragm up, so that the source at %s is at grazing incidence; turn its cable away from the jet.", who, where)
+		case g.inc == planner.GrazingIncidence:
 			say("Aim %s with its diaphragm edge-on to the aim point %s (grazing incidence).", who, where)
-		} else {
-			say("Point %s at the aim point %s (normal incidence: the diaphragm faces it).", who, where)
+		default:
+			say("Aim %s at %s, the diaphragm facing it (normal incidence).", who, where)
 		}
 	}
 }
@@ -215,6 +236,16 @@ func (b *builder) statusSteps(ss []*planner.Station, say func(string, ...any)) {
 	if len(wa) > 0 {
 		say("Check with the test engineer before setting %s: warning (see the table).", joinAnd(wa))
 	}
+}
+
+// markLine returns the words for marking a line on the floor: chalk on a
+// hard floor or the ground, tape or a string line on a treated (grating or
+// wedge) floor. what is the verb phrase ("Mark the axis on the floor").
+func (b *builder) markLine(what string) string {
+	if b.req.Cell.Floor == geometry.Treated {
+		return what + " (tape on the grating, or a string line)"
+	}
+	return what + " (a chalk line)"
 }
 
 // flat reports whether the stations lie at one height (within 1 mm).

@@ -1,9 +1,11 @@
 package sheet_test
 
 import (
+	"regexp"
 	"strings"
 	"testing"
 
+	"arcwright/internal/planner"
 	"arcwright/internal/sheet"
 )
 
@@ -86,5 +88,54 @@ func TestZonesDrawn(t *testing.T) {
 	}
 	if count[sheet.StyleObstacle] != 2 {
 		t.Errorf("got %d obstacles drawn, want 2", count[sheet.StyleObstacle])
+	}
+}
+
+// TestSetUpWording: the steps speak as a technician works (issue 9 item 7):
+// no chalk on a treated floor, no heights or edge-on aim for microphones
+// flush on the floor, a probe not "pointed", a round distance of the
+// sheet's own unit, and one feet-and-inches notation.
+func TestSetUpWording(t *testing.T) {
+	chamber := flowText(build(t, chamberPlan(t), sheet.Options{}))
+	p := padPlan(t, 60)
+	for i := range p.Stations {
+		if s := &p.Stations[i]; s.Array == "N" {
+			s.Stand, s.Height, s.Mic.Z = nil, 0, 0
+			s.Incidence = planner.GrazingIncidence
+		}
+	}
+	pad := flowText(build(t, p, sheet.Options{}))
+	tests := []struct {
+		name, text string
+		want, not  []string
+	}{
+		{"treated floor", chamber,
+			[]string{"Mark the axis on the floor (tape on the grating, or a string line", "Set CAM-01 as its own procedure says"},
+			[]string{"chalk", "Point each", "Point CAM"}},
+		{"hard floor, feet and inches", pad,
+			// 20 ft downstream, not a metric 5 m in feet
+			[]string{"Mark the axis on the floor (a chalk line)", `(20' 0" downstream)`, "lie flush on the floor: no heights to set", "Lay each microphone flat on the floor"},
+			[]string{"16' 4", " in.", "/16", "laser level from the floor: 0\""}},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			for _, w := range tt.want {
+				if !strings.Contains(tt.text, w) {
+					t.Errorf("the sheet does not say %q", w)
+				}
+			}
+			// the old notation, "147 ft 7-5/8 in", and zero feet, "0' 7-7/8\""
+			for _, re := range []*regexp.Regexp{regexp.MustCompile(`\d ft \d`), regexp.MustCompile(`(^|[^0-9])0' \d`)} {
+				if loc := re.FindStringIndex(tt.text); loc != nil {
+					t.Errorf("the sheet says %q", tt.text[max(0, loc[0]-40):min(len(tt.text), loc[1]+40)])
+				}
+			}
+			for _, w := range tt.not {
+				if strings.Contains(tt.text, w) {
+					i := strings.Index(tt.text, w)
+					t.Errorf("the sheet says %q: …%s…", w, tt.text[max(0, i-60):min(len(tt.text), i+60)])
+				}
+			}
+		})
 	}
 }
