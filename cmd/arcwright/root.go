@@ -134,6 +134,7 @@ codes and licensed practice.`,
 		newInitCommand(stdout),
 		newPlanCommand(stdout),
 		newCheckCommand(stdout),
+		newServeCommand(stdout, stderr),
 	)
 	return root
 }
