@@ -111,20 +111,22 @@ func (s *Server) plan() *snapshot {
 	if err != nil {
 		return &snapshot{problems: s.problems(err)}
 	}
+	// the planner's, the sheet's and the export's errors are placed at
+	// the layout's line and key by layout.Locate
 	p, err := planner.New(req)
 	if err != nil {
-		return &snapshot{problems: s.problems(err)}
+		return &snapshot{problems: s.problems(layout.Locate(req, err))}
 	}
 	var js, svg bytes.Buffer
 	if err := export.JSON(&js, p); err != nil {
-		return &snapshot{problems: s.problems(err)}
+		return &snapshot{problems: s.problems(layout.Locate(req, err))}
 	}
 	d, err := sheet.PlanView(p, sheet.Options{})
 	if err == nil {
 		err = d.WriteSVG(&svg)
 	}
 	if err != nil {
-		return &snapshot{problems: s.problems(err)}
+		return &snapshot{problems: s.problems(layout.Locate(req, err))}
 	}
 	return &snapshot{good: true, plan: p, json: js.Bytes(), svg: svg.Bytes(), units: req.System(), pdf: new(pdfCache)}
 }
