@@ -4,6 +4,7 @@ import (
 	"os"
 	"path/filepath"
 	"regexp"
+	"runtime/debug"
 	"strings"
 	"testing"
 )
@@ -242,5 +243,59 @@ func TestValidateRefusesWhatPlanRefuses(t *testing.T) {
 				t.Errorf("validate said %q, plan said %q, want the same located error", vErr, pErr)
 			}
 		})
+	}
+}
+
+// TestCompletion checks that the shell completion offers the values of
+// the flags that take a word from a list, and the layout's operating
+// points for --point, instead of file names (issue 10, item 14).
+func TestCompletion(t *testing.T) {
+	tests := []struct {
+		args []string
+		want []string
+	}{
+		{[]string{"plume", "--nozzle", ""}, []string{"convergent", "cd", "rectangular", "coaxial"}},
+		{[]string{"plume", "--units", ""}, []string{"metric", "imperial"}},
+		{[]string{"air", "--format", ""}, []string{"text", "csv", "json"}},
+		{[]string{"plan", "x.yaml", "--paper", ""}, []string{"A4", "A3", "Letter", "Tabloid"}},
+		{[]string{"plan", "x.yaml", "--scale", ""}, []string{"1:50", "1:100"}},
+		{[]string{"plume", "--layout", demoDir + "/anechoic-model-jet.yaml", "--point", ""}, []string{"CS-060", "HS-090"}},
+		{[]string{"validate", ""}, []string{"yaml", "yml"}},
+	}
+	for _, tt := range tests {
+		out, errOut, code := arc(t, append([]string{"__complete"}, tt.args...)...)
+		if code != exitOK {
+			t.Errorf("%v: exit %d, %s", tt.args, code, errOut)
+			continue
+		}
+		lines := strings.Split(out, "\n")
+		for _, w := range tt.want {
+			found := false
+			for _, l := range lines {
+				found = found || l == w
+			}
+			if !found {
+				t.Errorf("%v: got %q, want %q among the completions", tt.args, out, w)
+			}
+		}
+		if strings.Contains(out, ":0\n") {
+			t.Errorf("%v: got the default directive (file names), want values only", tt.args)
+		}
+	}
+}
+
+// TestVersion checks that `arcwright version` prints the version, the
+// module and the commit as the build recorded them (issue 10, item 14).
+func TestVersion(t *testing.T) {
+	out, _, code := arc(t, "version")
+	if code != exitOK || !strings.HasPrefix(out, "arcwright "+version+"\n") || !strings.Contains(out, "module arcwright") || !strings.Contains(out, "commit ") {
+		t.Errorf("got exit %d, %q", code, out)
+	}
+	var b strings.Builder
+	versionText(&b, &debug.BuildInfo{GoVersion: "go1.26.0", Main: debug.Module{Path: "arcwright", Version: "v1.2.3"},
+		Settings: []debug.BuildSetting{{Key: "vcs.revision", Value: "0123abc"}, {Key: "vcs.time", Value: "2026-12-02T06:00:00Z"}, {Key: "vcs.modified", Value: "true"}}})
+	want := "arcwright " + version + "\nmodule arcwright v1.2.3\ncommit 0123abc with uncommitted changes, committed 2026-12-02T06:00:00Z\nbuilt with go1.26.0\n"
+	if b.String() != want {
+		t.Errorf("got %q, want %q", b.String(), want)
 	}
 }

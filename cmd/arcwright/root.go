@@ -135,6 +135,8 @@ codes and licensed practice.`,
 		newPlanCommand(stdout),
 		newCheckCommand(stdout),
 		newServeCommand(stdout, stderr),
+		newVersionCommand(stdout),
 	)
+	addCompletions(root)
 	return root
 }
