@@ -16,8 +16,8 @@ import (
 // independently of the package's own header.
 var csvColumns = []string{
 	"id", "channel", "array", "kind", "x_m", "y_m", "z_m", "base_x_m", "base_y_m", "height_m",
-	"radius_m", "polar_deg", "polar_convention", "azimuth_deg", "stand", "aim", "status",
-	"governing_point", "velocity_clearance_m", "hot_clearance_m", "wall_clearance_m", "reasons",
+	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg", "stand", "aim", "status",
+	"governing_point", "velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m", "reasons",
 }
 
 func writeCSV(t *testing.T, p *planner.Plan) []byte {

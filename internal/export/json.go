@@ -174,7 +174,7 @@ func newPlanDoc(p *planner.Plan) *planDoc {
 		}
 	}
 	for i := range p.Stations {
-		d.Stations[i] = newStationDoc(&p.Stations[i])
+		d.Stations[i] = newStationDoc(p, &p.Stations[i])
 	}
 	for i := range p.Arrays {
 		d.Arrays[i] = newArrayDoc(&p.Arrays[i])

@@ -7,29 +7,33 @@ import (
 
 // stationDoc is one station.
 type stationDoc struct {
-	ID           string     `json:"id"`
-	Array        string     `json:"array"`
-	Kind         string     `json:"kind"`
-	Index        int        `json:"index"`
-	Channel      int        `json:"channel"`
-	X            num        `json:"x_m"`
-	Y            num        `json:"y_m"`
-	Z            num        `json:"z_m"`
-	BaseX        num        `json:"base_x_m"`
-	BaseY        num        `json:"base_y_m"`
-	Height       num        `json:"height_m"`
-	Radius       num        `json:"radius_m"`
-	Polar        num        `json:"polar_deg"`
-	NominalPolar num        `json:"nominal_polar_deg"`
-	Jet          jetDoc     `json:"jet"`
-	Stand        *string    `json:"stand"`
-	Aim          string     `json:"aim"`
-	AimAt        vecDoc     `json:"aim_at"`
-	Status       string     `json:"status"`
-	Governing    string     `json:"governing_point"`
-	Checks       checksDoc  `json:"checks"`
-	CheckDetails []checkDoc `json:"check_details"`
-	Reasons      []string   `json:"reasons"`
+	ID      string `json:"id"`
+	Array   string `json:"array"`
+	Kind    string `json:"kind"`
+	Index   int    `json:"index"`
+	Channel int    `json:"channel"`
+	X       num    `json:"x_m"`
+	Y       num    `json:"y_m"`
+	Z       num    `json:"z_m"`
+	BaseX   num    `json:"base_x_m"`
+	BaseY   num    `json:"base_y_m"`
+	Height  num    `json:"height_m"`
+	// Radius and Polar are as placed (the microphone's true distance and
+	// angle from the array's centre); the nominal ones are what the
+	// layout asks for, null where it asks for none.
+	Radius        num        `json:"radius_m"`
+	NominalRadius num        `json:"nominal_radius_m"`
+	Polar         num        `json:"polar_deg"`
+	NominalPolar  num        `json:"nominal_polar_deg"`
+	Jet           jetDoc     `json:"jet"`
+	Stand         *string    `json:"stand"`
+	Aim           string     `json:"aim"`
+	AimAt         vecDoc     `json:"aim_at"`
+	Status        string     `json:"status"`
+	Governing     string     `json:"governing_point"`
+	Checks        checksDoc  `json:"checks"`
+	CheckDetails  []checkDoc `json:"check_details"`
+	Reasons       []string   `json:"reasons"`
 }
 
 // jetDoc is a position in the jet frame.
@@ -70,31 +74,32 @@ type checkDoc struct {
 	Reason  string `json:"reason"`
 }
 
-func newStationDoc(s *planner.Station) stationDoc {
+func newStationDoc(p *planner.Plan, s *planner.Station) stationDoc {
 	status, _ := verdictName(s.Status)
 	d := stationDoc{
-		ID:           s.ID,
-		Array:        s.Array,
-		Kind:         kindName(s.Kind),
-		Index:        s.Index,
-		Channel:      s.Channel,
-		X:            metres(s.Mic.X),
-		Y:            metres(s.Mic.Y),
-		Z:            metres(s.Mic.Z),
-		BaseX:        metres(s.Base[0]),
-		BaseY:        metres(s.Base[1]),
-		Height:       metres(s.Height),
-		Radius:       metres(s.Radius),
-		Polar:        degrees(s.Polar),
-		NominalPolar: degrees(s.Nominal),
-		Jet:          jetDoc{X: metres(s.Jet.X), R: metres(s.Jet.R), Azimuth: degrees(s.Jet.Azimuth)},
-		Aim:          aimName(s.Incidence),
-		AimAt:        newVecDoc(s.AimAt),
-		Status:       status,
-		Governing:    s.Governing,
-		Checks:       newChecksDoc(s),
-		CheckDetails: make([]checkDoc, len(s.Checks)),
-		Reasons:      list(s.Reasons),
+		ID:            s.ID,
+		Array:         s.Array,
+		Kind:          kindName(s.Kind),
+		Index:         s.Index,
+		Channel:       s.Channel,
+		X:             metres(s.Mic.X),
+		Y:             metres(s.Mic.Y),
+		Z:             metres(s.Mic.Z),
+		BaseX:         metres(s.Base[0]),
+		BaseY:         metres(s.Base[1]),
+		Height:        metres(s.Height),
+		Radius:        metres(s.Radius),
+		NominalRadius: metres(p.NominalRadius(s)),
+		Polar:         degrees(s.Polar),
+		NominalPolar:  degrees(s.Nominal),
+		Jet:           jetDoc{X: metres(s.Jet.X), R: metres(s.Jet.R), Azimuth: degrees(s.Jet.Azimuth)},
+		Aim:           aimName(s.Incidence),
+		AimAt:         newVecDoc(s.AimAt),
+		Status:        status,
+		Governing:     s.Governing,
+		Checks:        newChecksDoc(s),
+		CheckDetails:  make([]checkDoc, len(s.Checks)),
+		Reasons:       list(s.Reasons),
 	}
 	if s.Stand != nil {
 		name := s.Stand.Name
