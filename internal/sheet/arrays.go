@@ -42,30 +42,6 @@ func arrayPath(ar *planner.ArrayResult, ss []*planner.Station) []r3.Vec {
 	return out
 }
 
-// arcPointAt returns the point of an arc at polar angle theta (rad, layout
-// convention), found between the two neighbouring stations whose polar
-// angles bracket it, and false outside the stations' range.
-func arcPointAt(c r3.Vec, ss []*planner.Station, theta float64) (r3.Vec, bool) {
-	for i := 0; i+1 < len(ss); i++ {
-		a, b := ss[i], ss[i+1]
-		lo, hi := math.Min(a.Polar, b.Polar), math.Max(a.Polar, b.Polar)
-		if theta < lo-1e-9 || theta > hi+1e-9 || hi-lo < 1e-9 {
-			continue
-		}
-		// theta may lie up to 1e-9 outside [lo, hi]: clamp, so that the
-		// index below is never −1 or past the end
-		t := clamp((theta-a.Polar)/(b.Polar-a.Polar), 0, 1)
-		pts := slerp(c, a.Mic, b.Mic, math.Max(math.Abs(b.Polar-a.Polar)/64, 1e-3))
-		if len(pts) < 2 {
-			return a.Mic, true
-		}
-		f := t * float64(len(pts)-1)
-		k := min(int(math.Floor(f)), len(pts)-2)
-		return r3.Add(pts[k], r3.Scale(f-float64(k), r3.Sub(pts[k+1], pts[k]))), true
-	}
-	return r3.Vec{}, false
-}
-
 // callout is a dimension or coordinate text to place near a point.
 type callout struct {
 	text   string
@@ -128,8 +104,8 @@ func (v *planView) arcDims(ar *planner.ArrayResult, ss []*planner.Station) {
 		v.shapes = append(v.shapes, arrow(StyleDim, from, to, 1.4)...)
 		m := lerp(c, mp, 0.55)
 		v.callouts = append(v.callouts, callout{
-			text:   "R " + pr.dim(ar.Radius),
-			note:   "arc " + ar.Name + " radius " + pr.length(ar.Radius),
+			text:   "R " + pr.dim(ar.Radius) + " nominal",
+			note:   "arc " + ar.Name + " nominal radius " + pr.length(ar.Radius),
 			anchor: m, dir: perp(unit(sub(mp, c), Pt{1, 0})), clear: 0.4, far: []float64{2, 4, 7},
 			kind: DimensionLabel, of: ar.Name,
 		})
@@ -175,55 +151,43 @@ func (v *planView) centreCallouts() {
 	v.callouts = append(cs, v.callouts...)
 }
 
-// arcTicks draws ticks inside the arc at round polar angles and queues
-// their angle labels: ticks at least 2.5 mm apart, labels at least 9 mm.
+// arcTicks draws a tick inside the arc at every station and queues the
+// nominal polar angle (the one the layout asks for, as the station table's
+// "Polar nominal") of every k-th station as a label, k the smallest step
+// that keeps the labels 9 mm apart, and of the last one. Arcs smaller than
+// 10 mm on the page get none.
 func (v *planView) arcTicks(ar *planner.ArrayResult, ss []*planner.Station, c Pt) {
-	rmm := v.t.mm(ar.Radius)
-	if rmm < 10 {
+	if v.t.mm(ar.Radius) < 10 {
 		return
 	}
-	perDeg := rmm * math.Pi / 180 // mm of arc per degree
-	tick := pickStep([]float64{1, 2, 5, 10, 15, 30}, 2.5/perDeg)
-	lab := pickStep([]float64{5, 10, 15, 30, 45, 90}, 9/perDeg)
-	if math.Mod(lab, tick) != 0 {
-		lab = tick * math.Ceil(lab/tick)
-	}
-	lo, hi := math.Inf(1), math.Inf(-1)
-	for _, s := range ss {
-		lo, hi = math.Min(lo, s.Polar), math.Max(hi, s.Polar)
-	}
-	loD, hiD := lo*180/math.Pi, hi*180/math.Pi
-	for d := math.Ceil(loD/tick-1e-9) * tick; d <= hiD+1e-9; d += tick {
-		p3, ok := arcPointAt(ar.Centre, ss, d*math.Pi/180)
-		if !ok {
-			continue
+	gap := math.Inf(1)
+	for i := 1; i < len(ss); i++ {
+		if d := dist(v.pos[ss[i]], v.pos[ss[i-1]]); d > 0.05 {
+			gap = math.Min(gap, d)
 		}
-		p := v.t.pt(p3.X, p3.Y)
+	}
+	k := 1
+	if gap < 9 {
+		k = int(math.Ceil(9 / gap))
+	}
+	for i, s := range ss {
+		p := v.pos[s]
 		out := sub(p, c)
 		if length(out) < 5 {
 			continue
 		}
 		u := unit(out, Pt{1, 0})
+		from := sub(p, mul(u, v.markR+0.3))
 		l := 1.2
-		if math.Mod(d, lab) == 0 {
+		if i%k == 0 || (i == len(ss)-1 && i%k >= (k+1)/2) {
 			l = 2.2
 			v.angles = append(v.angles, callout{
-				text: roundDeg(d * math.Pi / 180), anchor: sub(p, mul(u, l)), dir: mul(u, -1), clear: 0.3,
+				text: roundDeg(setOut(s)), anchor: sub(from, mul(u, l)), dir: mul(u, -1), clear: 0.3,
 				kind: AngleLabel, of: ar.Name,
 			})
 		}
-		v.shapes = append(v.shapes, line(StyleTick, p, sub(p, mul(u, l))))
+		v.shapes = append(v.shapes, line(StyleTick, from, sub(from, mul(u, l))))
 	}
-}
-
-// pickStep returns the first step at least need, or the last.
-func pickStep(steps []float64, need float64) float64 {
-	for _, s := range steps {
-		if s >= need {
-			return s
-		}
-	}
-	return steps[len(steps)-1]
 }
 
 // lineDims draws the offset of a sideline from the jet axis as a

@@ -201,8 +201,61 @@ func TestNaNCheckValues(t *testing.T) {
 	}
 	m := build(t, p, sheet.Options{})
 	row := stationRow(t, m, "A-01")
-	if row[9] != "n/a" || row[10] != "none" {
-		t.Errorf("got hot clearance %q and wall clearance %q, want \"n/a\" and \"none\"", row[9], row[10])
+	if row[11] != "n/a" || row[12] != "none" {
+		t.Errorf("got hot clearance %q and wall clearance %q, want \"n/a\" and \"none\"", row[11], row[12])
+	}
+}
+
+// TestOneGeometry: the station table gives the radius and polar angle as
+// the layout asks (nominal, as the plan marks them) and as placed (as the
+// checks use them), and names the operating point of each clearance
+// (issue 9 item 5: the plan said R 147' 7-5/8", the table 147' 11-11/16"
+// without saying why; one "Point" column for both zones).
+func TestOneGeometry(t *testing.T) {
+	p := chamberPlan(t)
+	s := &p.Stations[0] // A-01, nominal 30° at 3.5 m
+	s.Radius, s.Polar = 3.612, 30.7*math.Pi/180
+	for i := range s.Checks {
+		switch s.Checks[i].Name {
+		case planner.CheckVelocity:
+			s.Checks[i].Point = "SP3"
+		case planner.CheckHot:
+			s.Checks[i].Point = "SP7"
+		}
+	}
+	m := build(t, p, sheet.Options{})
+	row := stationRow(t, m, "A-01")
+	var heads []string
+	for _, pg := range m.Pages {
+		for _, tb := range pg.Tables {
+			if tb.Name == "stations" && len(heads) == 0 {
+				for _, c := range tb.Columns {
+					heads = append(heads, strings.Join(c.Heading, " "))
+				}
+			}
+		}
+	}
+	want := map[int][2]string{
+		3: {"Polar nominal", "30.0"}, 4: {"Polar as placed", "30.7"},
+		5: {"Radius nominal", "3.500"}, 6: {"Radius as placed", "3.612"},
+	}
+	for i, w := range want {
+		if !strings.HasPrefix(heads[i], w[0]) || row[i] != w[1] {
+			t.Errorf("column %d: got %q = %q, want %q = %q", i, heads[i], row[i], w[0], w[1])
+		}
+	}
+	if !strings.HasSuffix(row[10], "(SP3)") || !strings.HasSuffix(row[11], "(SP7)") {
+		t.Errorf("got clearances %q and %q, want each with its point (SP3), (SP7)", row[10], row[11])
+	}
+	// the plan marks the nominal radius and says so
+	found := false
+	for _, l := range m.Pages[0].Labels {
+		if l.For == "A" && strings.HasPrefix(l.Text, "R 3.500 m nominal") {
+			found = true
+		}
+	}
+	if !found {
+		t.Error("the plan does not label arc A \"R 3.500 m nominal\"")
 	}
 }
 

@@ -70,7 +70,7 @@ func (b *builder) legendEntries() []legendEntry {
 	add(func(r Rect) []Shape {
 		a, z := mid(r)
 		return []Shape{line(StyleArray, a, z), line(StyleTick, Pt{r.X + 3, a.Y}, Pt{r.X + 3, a.Y + 1.5}), line(StyleTick, Pt{r.X + 6, a.Y}, Pt{r.X + 6, a.Y + 1.5})}
-	}, "array line, angle ticks")
+	}, "array line; a tick at each station, its nominal polar angle")
 	for _, s := range []struct {
 		v planner.Verdict
 		t string

@@ -10,21 +10,24 @@ import (
 )
 
 // stationTable returns the station table: one row per station, lengths in
-// the layout's units.
+// the layout's units, radius and polar angle both as the layout asks
+// (nominal) and as placed, and the operating point of each clearance.
 func (b *builder) stationTable() tableSpec {
 	pr := b.pr
 	u := "(" + pr.lenUnit() + ")"
 	t := tableSpec{
 		name: "stations",
 		title: "STATION TABLE — X and Y from the datum, heights above the floor, lengths in " + pr.lenUnit() +
-			"; clearances are the smallest over all operating points (the governing point is named); " + pr.convention(),
-		heads: []string{"ID", "Ch", "Array", pr.polarHeading(), "Radius " + u, "Height " + u, "X " + u, "Y " + u,
-			"Clearance velocity zone " + u, "Clearance hot zone " + u, "Clearance wall " + u, "Point", "Status", "Reason"},
+			"; nominal: the radius and polar angle the layout asks for (arcs: in the arc's plane, as marked on the plan); as placed: the microphone's true distance and angle from its array's centre on the axis (or the nozzle exit), which the checks use" +
+			"; clearances are the smallest over all operating points, each with the point that governs it; " + pr.convention(),
+		heads: []string{"ID", "Ch", "Array", "Polar nominal (deg)", "Polar as placed (deg)", "Radius nominal " + u, "Radius as placed " + u,
+			"Height " + u, "X " + u, "Y " + u,
+			"Clearance velocity zone " + u, "Clearance hot zone " + u, "Clearance wall " + u, "Status", "Reason"},
 	}
 	n := len(t.heads)
 	t.right = make([]bool, n)
 	t.flex = make([]bool, n)
-	for i := 1; i <= 10; i++ {
+	for i := 1; i <= 12; i++ {
 		t.right[i] = i != 2
 	}
 	t.flex[n-1] = true
@@ -34,20 +37,32 @@ func (b *builder) stationTable() tableSpec {
 		if s.Channel > 0 {
 			ch = strconv.Itoa(s.Channel)
 		}
-		chk := func(name string) string {
+		chk := func(name string, withPoint bool) string {
 			c, ok := s.Check(name)
 			if !ok {
 				return "-"
 			}
-			return pr.cell(c.Value)
+			v := pr.cell(c.Value)
+			if withPoint && c.Point != "" && finite(c.Value) {
+				v += " (" + c.Point + ")"
+			}
+			return v
 		}
 		status := s.Status.String()
 		if s.Status == planner.Blocked {
 			status = "BLOCKED"
 		}
+		nomPolar := "-"
+		if finite(s.Nominal) {
+			nomPolar = deg(s.Nominal)
+		}
+		nomR := "-"
+		if r := b.plan.NominalRadius(s); finite(r) {
+			nomR = pr.cell(r)
+		}
 		t.rows = append(t.rows, []string{
-			s.ID, ch, s.Array, deg(s.Polar), pr.cell(s.Radius), pr.cell(s.Height), pr.cell(s.Mic.X), pr.cell(s.Mic.Y),
-			chk(planner.CheckVelocity), chk(planner.CheckHot), chk(planner.CheckWall), s.Governing, status,
+			s.ID, ch, s.Array, nomPolar, deg(s.Polar), nomR, pr.cell(s.Radius), pr.cell(s.Height), pr.cell(s.Mic.X), pr.cell(s.Mic.Y),
+			chk(planner.CheckVelocity, true), chk(planner.CheckHot, true), chk(planner.CheckWall, false), status,
 			strings.Join(s.Reasons, "; "),
 		})
 	}
