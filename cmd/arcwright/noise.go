@@ -38,9 +38,13 @@ func (o *NoiseOptions) AddFlags(fs *pflag.FlagSet) {
 	})
 	dist := newQuantity(units.Length, "", &o.Distance, "")
 	dist.doubt = doubtful(0, 2000, "m")
+	dist.plausible = &layout.Range{What: "distance", Min: 0, Max: layout.MaxLength, MinOpen: true, Unit: "m", Show: layout.MetricLength}
 	fs.Var(dist, "distance", "distance of the receiver from the centre of the nozzle exit, e.g. 5.08m or 150ft")
-	fs.Var(newQuantity(units.Angle, "deg", &o.Polar, "90deg"), "polar", "polar angle of the receiver from the downstream jet axis, e.g. 30deg (a bare number is in degrees)")
+	polar := newQuantity(units.Angle, "deg", &o.Polar, "90deg")
+	polar.plausible = &layout.Range{What: "polar angle from the downstream jet axis", Min: 0, Max: math.Pi, Show: units.FormatAngleDeg}
+	fs.Var(polar, "polar", "polar angle of the receiver from the downstream jet axis, e.g. 30deg (a bare number is in degrees)")
 	hum := newQuantity(units.Fraction, "%", &o.Humidity, "70%")
+	hum.plausible = &layout.Range{What: "relative humidity", Min: 0, Max: 1, Show: func(v float64) string { return strconv.FormatFloat(100*v, 'g', 4, 64) + " %" }}
 	fs.Var(&percentFlag{hum}, "humidity", "relative humidity of the air in percent, e.g. 70% (without a layout)")
 	formatFlag(fs, &o.Format, "text", "json")
 }

@@ -77,10 +77,10 @@ func TestNoiseErrors(t *testing.T) {
 		want string
 	}{
 		{"no distance", jetFlags, exitUsage, "--distance is required"},
-		{"negative distance", append(append([]string{}, jetFlags...), "--distance", "-1m"), exitError, "--distance"},
-		{"polar beyond 180", append(append([]string{}, jetFlags...), "--distance", "5m", "--polar", "200deg"), exitError, "--polar"},
+		{"negative distance", append(append([]string{}, jetFlags...), "--distance", "-1m"), exitUsage, `"--distance" flag: the distance -1.00 m is implausible`},
+		{"polar beyond 180", append(append([]string{}, jetFlags...), "--distance", "5m", "--polar", "200deg"), exitUsage, `"--polar" flag: the polar angle from the downstream jet axis 200.0° is implausible; want 0.0° to 180.0°`},
 		{"humidity with a layout", []string{"noise", "--layout", filepath.Join(demoDir, "anechoic-model-jet.yaml"), "--point", "CS-060", "--distance", "3m", "--humidity", "50%"}, exitUsage, "--humidity"},
-		{"humidity out of range", append(append([]string{}, jetFlags...), "--distance", "5m", "--humidity", "150%"), exitError, "RelativeHumidity"},
+		{"humidity out of range", append(append([]string{}, jetFlags...), "--distance", "5m", "--humidity", "150%"), exitUsage, `"--humidity" flag: the relative humidity 150 % is implausible; want 0 % to 100 %`},
 		{"plume's table flag", append(append([]string{}, jetFlags...), "--distance", "5m", "--at", "1m"), exitUsage, "unknown flag"},
 	}
 	for _, tt := range tests {

@@ -39,6 +39,22 @@
 // humidity. Temperatures and pressures must carry a unit. NPR, gamma, the
 // gas constant (J/(kg K)), ratios and Mach numbers are bare numbers.
 //
+// # Plausible values and limits of the file
+//
+// A value that parses but that no test uses is refused with its plausible
+// range, as a slip of a unit or an exponent: NPR above 1 up to [MaxNPR],
+// total temperatures [MinTotalTemperature] to [MaxTotalTemperature],
+// temperature ratios, gas constants, nozzle sizes, design Mach numbers,
+// aspect ratios, ambient pressure and temperature, the limits and the band
+// (see plausible.go); every length and coordinate is at most [MaxLength].
+// Names are at most [MaxNameLength] characters and the texts of the title
+// block at most [MaxTextLength], without control characters; a date written
+// with numbers must be a date. A file is at most [MaxInputSize] bytes of
+// UTF-8 text (a byte-order mark is allowed), a regular file, nested at most
+// [MaxDepth] levels, without custom YAML tags. More than [MaxProblems]
+// problems are counted in one last line. [Locate] places an error of the
+// planner, the sheet or an export at the line and key of the layout.
+//
 // In the [planner.Request] every length is in metres, every temperature in
 // kelvin, pressure in pascals, frequency in hertz and angle in radians;
 // polar angle ranges stay in the layout's convention.
@@ -68,5 +84,8 @@
 // [LoadAsBuilt] and [DecodeAsBuilt] read the station positions measured
 // after set-up, a CSV file with the columns id, x, y, z and optionally
 // base_x, base_y, into the map of planner.Request.AsBuilt, with the same
-// errors and units as the layout.
+// errors and units as the layout. Files saved by spreadsheets are read: a
+// byte-order mark, semicolons or tabs between the columns and decimal
+// commas. [UnknownAsBuilt] names, at its line, each station ID of the file
+// that the plan does not have.
 package layout

@@ -100,14 +100,14 @@ var (
 	TemperatureRatioRange = Range{What: "total-temperature ratio", Min: MinTemperatureRatio, Max: MaxTemperatureRatio}
 	GammaRange            = Range{What: "ratio of specific heats", Min: 1, Max: 5.0 / 3, MinOpen: true}
 	GasConstantRange      = Range{What: "gas constant", Min: MinGasConstant, Max: MaxGasConstant, Unit: "J/(kg K)"}
-	NozzleSizeRange       = Range{What: "nozzle dimension", Min: MinNozzleSize, Max: MaxNozzleSize, Unit: "m", Show: metricLength}
+	NozzleSizeRange       = Range{What: "nozzle dimension", Min: MinNozzleSize, Max: MaxNozzleSize, Unit: "m", Show: MetricLength}
 	DesignMachRange       = Range{What: "design Mach number", Min: 1, Max: MaxDesignMach, MinOpen: true}
 	AspectRatioRange      = Range{What: "aspect ratio", Min: 1, Max: MaxAspectRatio}
 	AmbientPressureRange  = Range{What: "ambient pressure", Min: MinPressure, Max: MaxPressure, Unit: "Pa", Show: kPa}
 	AmbientTempRange      = Range{What: "ambient temperature", Min: MinTemperature, Max: MaxTemperature, Unit: "K"}
 	VelocityLimitRange    = Range{What: "velocity limit", Min: 0, Max: MaxVelocityLimit, MinOpen: true, Unit: "m/s"}
 	TempLimitRange        = Range{What: "temperature limit", Min: MinTemperature, Max: MaxTotalTemperature, Unit: "K"}
-	DistanceRange         = Range{What: "distance", Min: 0, Max: MaxLength, Unit: "m", Show: metricLength}
+	DistanceRange         = Range{What: "distance", Min: 0, Max: MaxLength, Unit: "m", Show: MetricLength}
 	BandRange             = Range{What: "frequency", Min: MinBand, Max: MaxBand, Unit: "Hz", Show: units.FormatFrequency}
 )
 
@@ -147,8 +147,17 @@ func (r Range) show(v float64) string {
 // kPa prints a pressure, Pa, in kilopascals.
 func kPa(p float64) string { return units.FormatPressure(p, units.Metric) }
 
-// metricLength prints a length, m, to about three figures in metric units.
-func metricLength(m float64) string { return units.FormatLengthApprox(m, units.Metric) }
+// MetricLength prints a length of a range, m, to about three figures in
+// metric units: "0 m", "50.8 mm", "4.11 m", "100 km".
+func MetricLength(m float64) string {
+	switch a := math.Abs(m); {
+	case m == 0:
+		return "0 m"
+	case a >= 1000 && a < units.HugeValue:
+		return short(m/1000) + " km"
+	}
+	return units.FormatLengthApprox(m, units.Metric)
+}
 
 // Check returns nil when v is inside r, else an error that names the input,
 // the value (to four figures) and the range.

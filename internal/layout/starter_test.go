@@ -1,6 +1,8 @@
 package layout
 
 import (
+	"strconv"
+	"strings"
 	"testing"
 
 	"arcwright/internal/planner"
@@ -24,6 +26,25 @@ func TestStarterPlansClean(t *testing.T) {
 			if s.Status != planner.OK {
 				t.Errorf("%s: %s: %v", s.ID, s.Status, s.Reasons)
 			}
+		}
+	}
+}
+
+// TestStarterStatesRanges checks that the starter's comments state the
+// plausible ranges that Decode enforces (issue 10, item 1).
+func TestStarterStatesRanges(t *testing.T) {
+	text := string(Starter())
+	for _, want := range []string{
+		"above 1, up to " + short(MaxNPR),
+		short(MinTotalTemperature) + " K to " + short(MaxTotalTemperature) + " K",
+		short(MinTemperatureRatio) + " to " + short(MaxTemperatureRatio),
+		short(MinGasConstant) + " to " + short(MaxGasConstant),
+		"1 mm to " + short(MaxNozzleSize) + " m",
+		"up to " + short(MaxVelocityLimit) + " m/s",
+		"most " + strconv.Itoa(MaxNameLength) + " characters",
+	} {
+		if !strings.Contains(text, want) {
+			t.Errorf("the starter does not say %q", want)
 		}
 	}
 }
