@@ -3,6 +3,7 @@ package main
 import (
 	"encoding/json"
 	"math"
+	"os"
 	"path/filepath"
 	"strings"
 	"testing"
@@ -88,6 +89,88 @@ func TestNoiseErrors(t *testing.T) {
 			_, errOut, code := arc(t, tt.args...)
 			if code != tt.code || !strings.Contains(errOut, tt.want) {
 				t.Errorf("got exit %d, %q; want exit %d mentioning %q", code, errOut, tt.code, tt.want)
+			}
+		})
+	}
+}
+
+// TestPlanLevelsContract checks the plan's level and crew keys on every
+// demo: one level per operating point with exactly the issue's keys,
+// checks.oaspl_db the loudest, crew entries per position and point, and
+// the CSV's OASPL column.
+func TestPlanLevelsContract(t *testing.T) {
+	for _, demo := range demos {
+		t.Run(demo, func(t *testing.T) {
+			out, errOut, code := arc(t, "plan", filepath.Join(demoDir, demo+".yaml"), "--format", "json")
+			if code != exitOK {
+				t.Fatalf("exit %d: %s", code, errOut)
+			}
+			var doc struct {
+				Points   []struct{ Name string } `json:"points"`
+				Stations []struct {
+					ID     string                       `json:"id"`
+					Kind   string                       `json:"kind"`
+					Levels []map[string]json.RawMessage `json:"levels"`
+					Checks map[string]json.RawMessage   `json:"checks"`
+				} `json:"stations"`
+				Crew []map[string]json.RawMessage `json:"crew"`
+			}
+			if err := json.Unmarshal([]byte(out), &doc); err != nil {
+				t.Fatal(err)
+			}
+			for _, s := range doc.Stations {
+				if s.Kind == "probes" {
+					continue
+				}
+				if len(s.Levels) != len(doc.Points) {
+					t.Fatalf("%s: got %d levels, want %d", s.ID, len(s.Levels), len(doc.Points))
+				}
+				loudest := math.Inf(-1)
+				for i, l := range s.Levels {
+					if len(l) != 4 {
+						t.Errorf("%s: level keys %v, want point, oaspl_db, a_weighted_db, peak_db", s.ID, l)
+					}
+					var name string
+					var oaspl, a, pk float64
+					_ = json.Unmarshal(l["point"], &name)
+					if json.Unmarshal(l["oaspl_db"], &oaspl) != nil || json.Unmarshal(l["a_weighted_db"], &a) != nil || json.Unmarshal(l["peak_db"], &pk) != nil {
+						t.Errorf("%s: non-numeric level %v", s.ID, l)
+					}
+					if name != doc.Points[i].Name {
+						t.Errorf("%s: level %d is for %q, want %q", s.ID, i, name, doc.Points[i].Name)
+					}
+					loudest = math.Max(loudest, oaspl)
+				}
+				var c float64
+				if err := json.Unmarshal(s.Checks["oaspl_db"], &c); err != nil || c != loudest {
+					t.Errorf("%s: checks.oaspl_db %s, want the loudest level %g", s.ID, s.Checks["oaspl_db"], loudest)
+				}
+			}
+			keys := []string{"name", "point", "a_weighted_db", "peak_db", "allowed_hours", "status"}
+			if demo != "anechoic-model-jet" && len(doc.Crew) == 0 {
+				t.Errorf("no crew positions in the %s demo", demo)
+			}
+			for _, e := range doc.Crew {
+				if len(e) != len(keys) {
+					t.Errorf("crew entry %v, want exactly %v", e, keys)
+				}
+				for _, k := range keys {
+					if _, ok := e[k]; !ok {
+						t.Errorf("crew entry lacks %q", k)
+					}
+				}
+			}
+			path := filepath.Join(t.TempDir(), "stations.csv")
+			if _, errOut, code := arc(t, "plan", filepath.Join(demoDir, demo+".yaml"), "--csv", path); code != exitOK {
+				t.Fatalf("plan --csv: exit %d: %s", code, errOut)
+			}
+			b, err := os.ReadFile(path)
+			if err != nil {
+				t.Fatal(err)
+			}
+			csvOut := string(b)
+			if !strings.Contains(csvOut, ",oaspl_db,") {
+				t.Errorf("CSV header lacks oaspl_db:\n%.300s", csvOut)
 			}
 		})
 	}

@@ -313,6 +313,7 @@ func planText(w io.Writer, p *planner.Plan) {
 		}
 		tw.Flush()
 	}
+	planNoiseText(w, p)
 	if len(p.Warnings) > 0 {
 		fmt.Fprintln(w, "\nWarnings")
 		for _, s := range p.Warnings {

@@ -96,7 +96,7 @@ type NoiseSource struct {
 	grid [angleSteps + 1][]float64
 	// power[b] is the sound power in band b, W.
 	power              []float64
-	alpha              []float64 // absorption per band, dB/m
+	alpha              []float64 // absorption per band as an exponent, α·ln10/10 in 1/m
 	aw, cw             []float64 // A and C weighting per band, linear power factors
 	edgeK              []float64 // wave numbers of the band edges, rad/m (len(bands)+1)
 	beta, crest        float64
@@ -148,15 +148,17 @@ func NewNoiseSource(j Jet, atm Atmosphere, bands []Band) (*NoiseSource, error) {
 		shapeL[b] /= sumL
 		shapeF[b] /= sumF
 	}
+	shock := newShockSpectrum(j, area, s.beta, s.rho0, s.c0, tt, bands)
+	cells := make([]float64, (angleSteps+1)*n) // one allocation for the whole grid
 	for k := 0; k <= angleSteps; k++ {
 		th := float64(k) * math.Pi / angleSteps
-		row := make([]float64, n)
+		row := cells[k*n : (k+1)*n : (k+1)*n]
 		mix := s.rho0 * s.c0 * s.mixingW * MixingDirectivity(th, vr) / (4 * math.Pi)
 		wl := largeScaleWeight(th)
-		for b, band := range bands {
+		for b := range bands {
 			row[b] = mix * (wl*shapeL[b] + (1-wl)*shapeF[b])
-			row[b] += shockBand(j, area, s.beta, s.rho0, s.c0, tt, band.Centre, th)
 		}
+		shock.add(row, th)
 		s.grid[k] = row
 	}
 	// band power: W_b = (2π/(ρ0·c0))·∫ p²r² sin θ dθ, trapezoidal in 1° steps
@@ -176,7 +178,7 @@ func NewNoiseSource(j Jet, atm Atmosphere, bands []Band) (*NoiseSource, error) {
 	s.aw, s.cw = make([]float64, n), make([]float64, n)
 	s.edgeK = make([]float64, n+1)
 	for b, band := range bands {
-		s.alpha[b] = atm.Absorption(band.Centre)
+		s.alpha[b] = atm.Absorption(band.Centre) * math.Ln10 / 10
 		s.aw[b] = math.Pow(10, AWeighting(band.Centre)/10)
 		s.cw[b] = math.Pow(10, CWeighting(band.Centre)/10)
 		s.edgeK[b] = 2 * math.Pi * band.Lower / s.c0
@@ -290,23 +292,29 @@ func (s *NoiseSource) At(p Path, band []float64) (Levels, error) {
 		delta = math.Max(p.ImageDistance-p.Distance, 0)
 	}
 	var z, a, c float64
-	const ln10 = math.Ln10 / 10
-	prevSin := math.Sin(s.edgeK[0] * delta)
+	imaged := p.ImageDistance > 0 && delta > 0
+	var prevSin float64
+	if imaged {
+		prevSin = math.Sin(s.edgeK[0] * delta)
+	}
 	for b := range s.bands {
 		d := (row[0][b]*(1-rowF) + row[1][b]*rowF) / (p.Distance * p.Distance)
 		if !p.Lossless {
-			d *= math.Exp(-s.alpha[b] * p.Distance * ln10)
+			d *= math.Exp(-s.alpha[b] * p.Distance)
 		}
 		p2 := d
-		nextSin := math.Sin(s.edgeK[b+1] * delta)
+		var nextSin float64
+		if imaged {
+			nextSin = math.Sin(s.edgeK[b+1] * delta)
+		}
 		if p.ImageDistance > 0 {
 			q := (img[0][b]*(1-imgF) + img[1][b]*imgF) / (p.ImageDistance * p.ImageDistance)
 			if !p.Lossless {
-				q *= math.Exp(-s.alpha[b] * p.ImageDistance * ln10)
+				q *= math.Exp(-s.alpha[b] * p.ImageDistance)
 			}
 			// band average of cos(kΔ) over the band: the coherent image sum
 			avg := 1.0
-			if dk := (s.edgeK[b+1] - s.edgeK[b]) * delta; dk > 0 {
+			if dk := (s.edgeK[b+1] - s.edgeK[b]) * delta; imaged && dk > 0 {
 				avg = (nextSin - prevSin) / dk
 			}
 			p2 += q + 2*math.Sqrt(d*q)*avg

@@ -113,17 +113,40 @@ func doppler(vj, c0, thetaJ float64) float64 {
 	return math.Max(math.Abs(1-shockConvection*vj/c0*math.Cos(thetaJ)), minDoppler)
 }
 
-// shockBand returns p²·r² (Pa²·m²) of the shock-associated noise in the
-// band of centre f (Hz) at the polar angle thetaJ (rad).
-func shockBand(j Jet, area, beta, rho0, c0, ttRatio, f, thetaJ float64) float64 {
+// shockSpectrum is the shock-associated noise of one jet, ready to be
+// evaluated at many angles: p²·r² per band is
+// amp·H(log10 σ_b + log10 doppler(θ)), with σ_b the σ of band b at 90°.
+type shockSpectrum struct {
+	amp      float64   // 1.92×10⁻³·(ρ0·c0²)²·Aj/(4π)·β^η, Pa²·m², with the cold offset
+	logSigma []float64 // log10 σ of each band without the Doppler factor
+	vr       float64   // Vj/c0
+}
+
+// newShockSpectrum prepares the shock noise over bands; beta == 0 gives
+// none.
+func newShockSpectrum(j Jet, area, beta, rho0, c0, ttRatio float64, bands []Band) shockSpectrum {
 	if beta == 0 {
-		return 0
-	}
-	sigma := shockSigmaCoefficient * beta * f * math.Sqrt(area) * doppler(j.Velocity, c0, thetaJ) / c0
-	lh := shockH(math.Log10(sigma))
-	if ttRatio < shockHotRatio {
-		lh += shockColdOffset
+		return shockSpectrum{}
 	}
 	q := rho0 * c0 * c0
-	return shockCoefficient * q * q * area / (4 * math.Pi) * math.Pow(beta, shockExponent(beta, ttRatio)) * math.Pow(10, lh)
+	s := shockSpectrum{amp: shockCoefficient * q * q * area / (4 * math.Pi) * math.Pow(beta, shockExponent(beta, ttRatio)), vr: j.Velocity / c0}
+	if ttRatio < shockHotRatio {
+		s.amp *= math.Pow(10, shockColdOffset)
+	}
+	s.logSigma = make([]float64, len(bands))
+	for b, band := range bands {
+		s.logSigma[b] = math.Log10(shockSigmaCoefficient * beta * band.Centre * math.Sqrt(area) / c0)
+	}
+	return s
+}
+
+// add adds the shock noise at the polar angle thetaJ (rad) to row.
+func (s shockSpectrum) add(row []float64, thetaJ float64) {
+	if s.amp == 0 {
+		return
+	}
+	ld := math.Log10(math.Max(math.Abs(1-shockConvection*s.vr*math.Cos(thetaJ)), minDoppler))
+	for b, ls := range s.logSigma {
+		row[b] += s.amp * math.Pow(10, shockH(ls+ld))
+	}
 }

@@ -17,7 +17,7 @@ var csvHeader = []string{
 	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg",
 	"stand", "aim", "status", "governing_point",
 	"velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m",
-	"reasons",
+	"oaspl_db", "reasons",
 }
 
 // checkPoint returns the operating point that governs the check named
@@ -37,7 +37,7 @@ const reasonSeparator = "; "
 //	radius_m, nominal_radius_m, polar_deg, nominal_polar_deg,
 //	polar_convention, azimuth_deg, stand, aim, status, governing_point,
 //	velocity_clearance_m, velocity_point, hot_clearance_m, hot_point,
-//	wall_clearance_m, reasons
+//	wall_clearance_m, oaspl_db, reasons
 //
 // Lengths are metres with 4 decimals and angles degrees with 2. radius_m
 // and polar_deg are as placed: the microphone's true distance and polar
@@ -48,7 +48,9 @@ const reasonSeparator = "; "
 // polar_convention names ("from_jet_axis" or "from_inlet"), and azimuth_deg
 // is the jet-frame azimuth. velocity_point and hot_point name the operating
 // point that governs each clearance; governing_point the one of the worst
-// check. A NaN or ±Inf value, or a check the station does not have, gives
+// check. oaspl_db is the predicted OASPL at the microphone for the loudest
+// operating point (dB, 2 decimals). A NaN or ±Inf value, or a check the
+// station does not have, gives
 // an empty cell. stand is empty for a microphone flush on the floor and
 // channel is 0 for a probe stand. Reasons are joined with "; ". Rows end
 // in "\n" (encoding/csv quoting).
@@ -78,6 +80,7 @@ func CSV(w io.Writer, p *planner.Plan) error {
 			cellMetres(checkValue(s, planner.CheckVelocity)), checkPoint(s, planner.CheckVelocity),
 			cellMetres(checkValue(s, planner.CheckHot)), checkPoint(s, planner.CheckHot),
 			cellMetres(checkValue(s, planner.CheckWall)),
+			cellFixed(checkValue(s, planner.CheckLevel), levelDecimals),
 			strings.Join(s.Reasons, reasonSeparator),
 		)
 		if err := cw.Write(row); err != nil {

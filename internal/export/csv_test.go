@@ -17,7 +17,7 @@ import (
 var csvColumns = []string{
 	"id", "channel", "array", "kind", "x_m", "y_m", "z_m", "base_x_m", "base_y_m", "height_m",
 	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg", "stand", "aim", "status",
-	"governing_point", "velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m", "reasons",
+	"governing_point", "velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m", "oaspl_db", "reasons",
 }
 
 func writeCSV(t *testing.T, p *planner.Plan) []byte {

@@ -32,6 +32,7 @@ type planDoc struct {
 	Arrays         []arrayDoc      `json:"arrays"`
 	Points         []pointDoc      `json:"points"`
 	Absorption     []absorptionDoc `json:"absorption"`
+	Crew           []crewDoc       `json:"crew"`
 }
 
 type titleDoc struct {
@@ -164,6 +165,7 @@ func newPlanDoc(p *planner.Plan) *planDoc {
 		Arrays:     make([]arrayDoc, len(p.Arrays)),
 		Points:     make([]pointDoc, len(p.Points)),
 		Absorption: make([]absorptionDoc, len(p.Absorption)),
+		Crew:       newCrewDocs(p),
 	}
 	if len(p.Points) > 0 {
 		name := p.Points[p.Governing].Name

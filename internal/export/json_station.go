@@ -31,6 +31,7 @@ type stationDoc struct {
 	AimAt         vecDoc     `json:"aim_at"`
 	Status        string     `json:"status"`
 	Governing     string     `json:"governing_point"`
+	Levels        []levelDoc `json:"levels"`
 	Checks        checksDoc  `json:"checks"`
 	CheckDetails  []checkDoc `json:"check_details"`
 	Reasons       []string   `json:"reasons"`
@@ -62,6 +63,7 @@ type checksDoc struct {
 	SourceOffset      num   `json:"source_offset_db"`
 	Inflow            num   `json:"inflow_m_s"`
 	BuoyantPlume      *bool `json:"buoyant_plume"`
+	OASPL             num   `json:"oaspl_db"`
 }
 
 // checkDoc is one check in full.
@@ -100,10 +102,14 @@ func newStationDoc(p *planner.Plan, s *planner.Station) stationDoc {
 		Checks:        newChecksDoc(s),
 		CheckDetails:  make([]checkDoc, len(s.Checks)),
 		Reasons:       list(s.Reasons),
+		Levels:        make([]levelDoc, len(s.Levels)),
 	}
 	if s.Stand != nil {
 		name := s.Stand.Name
 		d.Stand = &name
+	}
+	for i, l := range s.Levels {
+		d.Levels[i] = levelDoc{Point: l.Point, OASPL: decibels(l.OASPL), AWeighted: decibels(l.AWeighted), Peak: decibels(l.Peak)}
 	}
 	for i, c := range s.Checks {
 		v, _ := verdictName(c.Verdict)
@@ -134,6 +140,7 @@ func newChecksDoc(s *planner.Station) checksDoc {
 		SourceOffset:      g(planner.CheckSourceErr),
 		Inflow:            g(planner.CheckInflow),
 		BuoyantPlume:      flag(checkValue(s, planner.CheckBuoyancy)),
+		OASPL:             decibels(checkValue(s, planner.CheckLevel)),
 	}
 }
 

@@ -17,8 +17,8 @@ const DefaultBaseHeight = 0.1
 const MaxStations = 1000
 
 var (
-	standKeys   = []string{"name", "base_radius", "base_height", "pole_diameter", "boom_length"}
-	arrayKeys   = []string{"name", "stand", "first_channel", "aim", "arc", "line", "near_field", "ring", "points", "probes"}
+	standKeys   = []string{"name", "base_radius", "base_height", "pole_diameter", "boom_length", "microphone"}
+	arrayKeys   = []string{"name", "stand", "first_channel", "aim", "microphone", "arc", "line", "near_field", "ring", "points", "probes"}
 	patternKeys = []string{"arc", "line", "near_field", "ring", "points", "probes"}
 	aimNames    = []string{"normal", "grazing"}
 )
@@ -59,6 +59,11 @@ func (d *decoder) standsSection(top *section, ci *cellInfo, names *nameSet) []pl
 		if n := s.get("boom_length"); n != nil {
 			var good bool
 			st.BoomLength, good = d.nonNegativeLength(n, s.field("boom_length"), "the boom length")
+			ok = ok && good
+		}
+		if n := s.get("microphone"); n != nil {
+			var good bool
+			st.Microphone, good = d.microphone(n, s.field("microphone"))
 			ok = ok && good
 		}
 		if ok {
@@ -128,6 +133,11 @@ func (d *decoder) array(s *section, ac *arrayContext, names *nameSet) (planner.A
 		} else {
 			ok = false
 		}
+	}
+	if n := s.get("microphone"); n != nil {
+		var good bool
+		a.Microphone, good = d.microphone(n, s.field("microphone"))
+		ok = ok && good
 	}
 	var given []string
 	for _, k := range patternKeys {

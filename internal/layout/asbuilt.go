@@ -25,7 +25,7 @@ var (
 	// as-built file, its x_m … base_y_m columns in metres, the rest ignored.
 	exportOnly = []string{"channel", "array", "kind", "height_m", "radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg",
 		"polar_convention", "azimuth_deg", "stand", "aim", "status", "governing_point", "velocity_clearance_m", "velocity_point",
-		"hot_clearance_m", "hot_point", "wall_clearance_m", "reasons"}
+		"hot_clearance_m", "hot_point", "wall_clearance_m", "oaspl_db", "reasons"}
 )
 
 // LoadAsBuilt reads the station positions measured after set-up from the

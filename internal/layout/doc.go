@@ -22,10 +22,19 @@
 //	limits            optional thresholds and margins of the checks
 //	band              low and high, the frequency band of interest (required)
 //	stands            stand types: name, base_radius, base_height,
-//	                  pole_diameter, boom_length
-//	arrays            each a name, an optional stand, first_channel, aim and
-//	                  one pattern: arc, line, near_field, ring, points, probes
+//	                  pole_diameter, boom_length, microphone
+//	arrays            each a name, an optional stand, first_channel, aim,
+//	                  microphone and one pattern: arc, line, near_field, ring,
+//	                  points, probes
 //	sheet             scale and paper of the printed sheet
+//	noise             room_absorption or reverberation_time (hard-walled
+//	                  cells), contours (extra dB(A) levels for the sheet)
+//	crew              where people stay during runs: name, at, height, hours
+//
+// A microphone is a nominal size ("1/4 in", whose typical limits apply) or
+// a map of size, max_level (dB) and upper_frequency. Levels are numbers of
+// dB ("165 dB", "95 dB(A)"); hours are a number of hours, "2 h" or
+// "30 min".
 //
 // [Starter] returns a complete, commented layout that explains every key; it
 // is the reference of the format.

@@ -43,7 +43,7 @@ const (
 )
 
 // higherIsWorse lists the checks whose larger values are worse.
-var higherIsWorse = map[string]bool{CheckSourceErr: true, CheckAbsorption: true, CheckInflow: true, CheckBuoyancy: true}
+var higherIsWorse = map[string]bool{CheckSourceErr: true, CheckAbsorption: true, CheckInflow: true, CheckBuoyancy: true, CheckLevel: true}
 
 // worse reports whether a is worse than b (same check).
 func worse(a, b Check) bool {
@@ -75,7 +75,7 @@ type tally struct {
 var checkNames = [...]string{
 	CheckVelocity, CheckHot, CheckWall, CheckObstacle, CheckKeepOut, CheckHeight, CheckSpacing,
 	CheckSight, CheckFarField, CheckWavelength, CheckFresnel, CheckSourceErr, CheckGround,
-	CheckAbsorption, CheckInflow, CheckBuoyancy,
+	CheckAbsorption, CheckInflow, CheckBuoyancy, CheckLevel,
 }
 
 var checkIndex = func() map[string]int {
@@ -132,6 +132,7 @@ type checker struct {
 	maxFoot   float64
 	splashes  []splash    // where zones strike obstacles
 	fresnel   [][]float64 // L²/λ per point and band, m
+	noise     *noiseModel // level predictions
 }
 
 // m prints a length in the layout's units, to about three figures.
@@ -399,6 +400,7 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	// 5–10: acoustics, per point
 	if isMic {
 		ck.acoustic(st, mic, centreX, t)
+		ck.levelCheck(st, arr, t)
 	}
 	ck.finish(st, t)
 }

@@ -1,9 +1,80 @@
 package planner
 
 import (
+	"fmt"
+	"math"
+
+	"github.com/paulmach/orb/planar"
+	"gonum.org/v1/gonum/spatial/r3"
+
 	"arcwright/internal/acoustics"
+	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
 )
+
+// CheckLevel is the predicted OASPL at the microphone for the loudest
+// operating point, dB, and whether the station's microphone can take it.
+const CheckLevel = "oaspl_db"
+
+// DefaultRoomAbsorption is the average absorption coefficient assumed for a
+// hard-walled cell whose layout gives neither an absorption coefficient nor
+// a reverberation time: 0.02, bare painted concrete and steel (common
+// practice; low on purpose, so that the reverberant field is not
+// underestimated). The plan warns when it is used.
+const DefaultRoomAbsorption = 0.02
+
+// DefaultEarHeight is the height of a crew member's ears above the floor
+// when a crew position gives none, m (1.6 m standing; common practice).
+const DefaultEarHeight = 1.6
+
+// Noise is what the layout says about the room's acoustics and the noise
+// contours to draw.
+type Noise struct {
+	// RoomAbsorption is the average absorption coefficient ᾱ of a
+	// hard-walled cell (0 < ᾱ < 1); 0 means not given.
+	RoomAbsorption float64
+	// Reverberation is the reverberation time T60 of a hard-walled cell, s,
+	// turned into ᾱ by Sabine's formula; 0 means not given.
+	Reverberation float64
+	// Contours are A-weighted levels, dB(A), the sheet draws as contours
+	// besides 85 dB(A) and 140 dB(C) peak.
+	Contours []float64
+}
+
+// Crew is a place where people stay during runs.
+type Crew struct {
+	Name string
+	// At is the position of the ears, cell frame, m.
+	At r3.Vec
+	// Hours is the time spent there per day during runs, h.
+	Hours float64
+	Line  int // line in the layout file, for messages; 0 unknown
+}
+
+// Level is a station's predicted level for one operating point.
+type Level struct {
+	Point       string
+	OASPL       float64 // dB re 20 µPa
+	AWeighted   float64 // dB(A)
+	Peak        float64 // C-weighted peak estimate, dB(C)
+	Uncertainty float64 // ± dB on OASPL
+}
+
+// CrewExposure is a crew position's exposure for one operating point.
+type CrewExposure struct {
+	Name, Point string
+	At          r3.Vec
+	Hours       float64
+	AWeighted   float64 // dB(A) at the position
+	Peak        float64 // C-weighted peak estimate, dB(C)
+	// DailyExposure is L_EX,8h for Hours at AWeighted, dB(A).
+	DailyExposure float64
+	// AllowedHours is the time allowed at AWeighted under the NIOSH REL, h.
+	AllowedHours float64
+	Class        acoustics.ExposureClass
+	Status       Verdict
+	Reason       string
+}
 
 // NoiseJet returns the fully expanded jet of e as the acoustics package's
 // noise models take it.
@@ -21,4 +92,251 @@ func NoiseJet(e jet.Exit) acoustics.Jet {
 		DesignMach:       md,
 		ShockFree:        !e.ShockContaining(),
 	}
+}
+
+// noiseModel holds what level predictions share: one source per operating
+// point, the room constant and the floor.
+type noiseModel struct {
+	sources   []*acoustics.NoiseSource
+	roomR     float64 // room constant, m²; 0 without a reverberant field
+	alpha     float64 // the average absorption coefficient used; 0 without a room
+	assumed   bool    // alpha is DefaultRoomAbsorption
+	hardFloor bool
+}
+
+// newNoiseModel predicts the noise source of every point and the room.
+func newNoiseModel(req *Request, points []PointResult, atm acoustics.Atmosphere) (*noiseModel, error) {
+	m := &noiseModel{hardFloor: req.Cell.Floor == geometry.Hard}
+	for k := range points {
+		j := NoiseJet(points[k].Exit)
+		s, err := acoustics.NewNoiseSource(j, atm, acoustics.NoiseBands(j))
+		if err != nil {
+			return nil, fmt.Errorf("%w: operating point %s: noise: %w", ErrRequest, points[k].Name, err)
+		}
+		m.sources = append(m.sources, s)
+	}
+	c := &req.Cell
+	if c.Kind != geometry.HardWalled || !c.Bounded() || math.IsInf(c.Ceiling, 1) {
+		return m, nil
+	}
+	area := math.Abs(planar.Area(c.Boundary))
+	perim := planar.Length(c.Boundary)
+	surface := 2*area + perim*c.Ceiling
+	volume := area * c.Ceiling
+	switch n := req.Noise; {
+	case n.RoomAbsorption > 0:
+		m.alpha = n.RoomAbsorption
+	case n.Reverberation > 0:
+		m.alpha = acoustics.SabineAbsorption(volume, surface, n.Reverberation)
+	default:
+		m.alpha, m.assumed = DefaultRoomAbsorption, true
+	}
+	if !(m.alpha > 0 && m.alpha < 1) {
+		return nil, fmt.Errorf("%w: noise: the reverberation time %g s gives an average absorption coefficient of %.2f for this room; want one below 1 (is the time too short?)", ErrRequest, req.Noise.Reverberation, m.alpha)
+	}
+	m.roomR = acoustics.RoomConstant(surface, m.alpha)
+	return m, nil
+}
+
+// levelAt predicts the levels of point k at pos (cell frame, m): spherical
+// spreading from the source at the end of the nominal potential core (the
+// source position of the source-offset and floor checks), air absorption,
+// the floor image over a hard floor and the room's reverberant field.
+func (ck *checker) levelAt(k int, pos r3.Vec) (acoustics.Levels, error) {
+	p := &ck.points[k]
+	f := ck.req.Exit
+	q := f.ToJet(pos)
+	rel := geometry.JetPoint{X: q.X - p.CoreNominal, R: q.R}
+	path := acoustics.Path{Distance: rel.Distance(), Polar: rel.Polar(), RoomConstant: ck.noise.roomR}
+	if ck.noise.hardFloor && pos.Z >= 0 {
+		src := f.ToCell(geometry.JetPoint{X: p.CoreNominal})
+		d := r3.Sub(pos, r3.Vec{X: src.X, Y: src.Y, Z: -src.Z})
+		path.ImageDistance = r3.Norm(d)
+		if path.ImageDistance > 0 {
+			// the jet axis is horizontal, so the image jet's axis is the same
+			path.ImagePolar = math.Acos(math.Max(-1, math.Min(1, r3.Dot(d, f.Axis())/path.ImageDistance)))
+		}
+	}
+	return ck.noise.sources[k].At(path, nil)
+}
+
+// microphone returns the microphone the station's array or stand names, or
+// nil.
+func microphoneOf(st *Station, arr *Array) *acoustics.Microphone {
+	if arr.Microphone != nil {
+		return arr.Microphone
+	}
+	if st.Stand != nil {
+		return st.Stand.Microphone
+	}
+	return nil
+}
+
+// levelCheck predicts the station's levels for every point and, for
+// microphones, checks the loudest against the microphone.
+func (ck *checker) levelCheck(st *Station, arr *Array, t *tally) {
+	st.Levels = make([]Level, 0, len(ck.points))
+	loud := -1
+	bad := false
+	for k := range ck.points {
+		l, err := ck.levelAt(k, st.Mic)
+		if err != nil {
+			bad = true
+			continue
+		}
+		st.Levels = append(st.Levels, Level{Point: ck.points[k].Name, OASPL: l.OASPL, AWeighted: l.AWeighted, Peak: l.Peak, Uncertainty: l.Uncertainty})
+		if loud < 0 || l.OASPL > st.Levels[loud].OASPL {
+			loud = len(st.Levels) - 1
+		}
+	}
+	if st.Kind == Probes {
+		return
+	}
+	if bad || loud < 0 {
+		t.add(Check{Name: CheckLevel, Value: math.NaN(), Unit: "dB", Verdict: Blocked,
+			Reason: "the level could not be predicted: the microphone is at the source position"})
+		return
+	}
+	l := st.Levels[loud]
+	top := ck.req.Band.High
+	c := Check{Name: CheckLevel, Value: l.OASPL, Unit: "dB", Verdict: OK, Point: l.Point}
+	head := fmt.Sprintf("%.0f dB OASPL (±%.0f dB), %.0f dB(A), peak about %.0f dB(C) for %s", l.OASPL, l.Uncertainty, l.AWeighted, l.Peak, l.Point)
+	suggest := "no size in the typical-values table fits: split the band or choose from data sheets"
+	if cls, ok := acoustics.SmallestFit(l.OASPL, top); ok {
+		suggest = fmt.Sprintf("a %s microphone fits (typically %s and %.0f dB; from memory, check the data sheet)", cls.Name, frequencyWords(cls.UpperFrequencyLow), cls.MaxLevelLow)
+	}
+	m := microphoneOf(st, arr)
+	if m == nil {
+		c.Reason = head + "; " + suggest
+		t.add(c)
+		return
+	}
+	margin := m.LevelMargin(l.OASPL)
+	var problems []string
+	if margin < 0 {
+		problems = append(problems, fmt.Sprintf("with the %.0f dB crest allowance it exceeds the %s microphone's %.0f dB limit by %.0f dB", acoustics.CrestAllowance, m.Name, m.MaxLevel, -margin))
+	}
+	if m.UpperFrequency > 0 && top > m.UpperFrequency {
+		problems = append(problems, fmt.Sprintf("the band reaches %s, above the %s microphone's %s", frequencyWords(top), m.Name, frequencyWords(m.UpperFrequency)))
+	}
+	if len(problems) == 0 {
+		c.Reason = fmt.Sprintf("%s; the %s microphone's %.0f dB limit leaves %.0f dB above the %.0f dB crest allowance", head, m.Name, m.MaxLevel, margin, acoustics.CrestAllowance)
+		t.add(c)
+		return
+	}
+	c.Verdict = Warn
+	c.Reason = head + ": " + joinWords(problems) + "; " + suggest
+	t.add(c)
+}
+
+// frequencyWords prints a frequency, Hz, to three figures.
+func frequencyWords(f float64) string {
+	if f >= 1e3 {
+		return fmt.Sprintf("%.3g kHz", f/1e3)
+	}
+	return fmt.Sprintf("%.3g Hz", f)
+}
+
+// joinWords joins phrases with commas and a final "and".
+func joinWords(s []string) string {
+	switch len(s) {
+	case 0:
+		return ""
+	case 1:
+		return s[0]
+	}
+	out := s[0]
+	for _, w := range s[1 : len(s)-1] {
+		out += ", " + w
+	}
+	return out + " and " + s[len(s)-1]
+}
+
+// crewExposures predicts every crew position's exposure for every point.
+func (ck *checker) crewExposures() []CrewExposure {
+	var out []CrewExposure
+	for _, c := range ck.req.Crew {
+		for k := range ck.points {
+			e := CrewExposure{Name: c.Name, Point: ck.points[k].Name, At: c.At, Hours: c.Hours}
+			l, err := ck.levelAt(k, c.At)
+			if err != nil {
+				e.AWeighted, e.Peak, e.DailyExposure, e.AllowedHours = math.NaN(), math.NaN(), math.NaN(), 0
+				e.Class, e.Status = acoustics.AboveLimit, Blocked
+				e.Reason = "the level could not be predicted: the position is at the source"
+				out = append(out, e)
+				continue
+			}
+			e.AWeighted, e.Peak = l.AWeighted, l.Peak
+			e.DailyExposure = acoustics.DailyExposure(l.AWeighted, c.Hours)
+			e.AllowedHours = acoustics.NIOSHAllowedHours(l.AWeighted)
+			e.Class = acoustics.ClassifyExposure(e.DailyExposure, e.Peak)
+			over := c.Hours > e.AllowedHours
+			switch {
+			case e.Class == acoustics.AboveLimit || over || e.Peak >= acoustics.NIOSHCeilingPeak:
+				e.Status = Blocked
+			case e.Class > acoustics.BelowAction:
+				e.Status = Warn
+			default:
+				e.Status = OK
+			}
+			e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
+				l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(c.Hours), e.Class, durationWords(e.AllowedHours))
+			switch e.Status {
+			case Blocked:
+				e.Reason += ": do not stay here during runs of " + e.Point + " without hearing protection chosen under the site's hearing-conservation procedures"
+			case Warn:
+				e.Reason += ": hearing protection and the site's procedures apply"
+			}
+			out = append(out, e)
+		}
+	}
+	return out
+}
+
+// hoursWords prints a number of hours.
+func hoursWords(h float64) string { return fmt.Sprintf("%.3g", h) }
+
+// durationWords prints an allowed time in h, min or s.
+func durationWords(h float64) string {
+	switch {
+	case h >= 24:
+		return "more than 24 h"
+	case h >= 1:
+		return fmt.Sprintf("%.3g h", h)
+	case h*60 >= 1:
+		return fmt.Sprintf("%.3g min", h*60)
+	}
+	return fmt.Sprintf("%.2g s", h*3600)
+}
+
+// noiseWarnings returns the plan's warnings about levels: an assumed room
+// absorption and crew positions that pass a limit.
+func (ck *checker) noiseWarnings(plan *Plan) []string {
+	var w []string
+	if ck.noise.assumed {
+		w = append(w, fmt.Sprintf("the hard-walled cell's sound absorption is not given: the levels assume an average absorption coefficient of %.2f (bare concrete and steel); give noise.room_absorption or noise.reverberation_time", DefaultRoomAbsorption))
+	}
+	// one line per crew position: its loudest point that passes a limit
+	for i := 0; i < len(plan.Crew); {
+		j := i
+		worst, n := -1, 0
+		for ; j < len(plan.Crew) && plan.Crew[j].Name == plan.Crew[i].Name; j++ {
+			if e := plan.Crew[j]; e.Status == Blocked {
+				n++
+				if worst < 0 || !(e.AWeighted <= plan.Crew[worst].AWeighted) {
+					worst = j
+				}
+			}
+		}
+		if worst >= 0 {
+			e := plan.Crew[worst]
+			others := ""
+			if n > 1 {
+				others = fmt.Sprintf(" (and %d other %s)", n-1, plural(n-1, "point", "points"))
+			}
+			w = append(w, fmt.Sprintf("crew position %s passes an exposure limit for %s%s: %s", e.Name, e.Point, others, e.Reason))
+		}
+		i = j
+	}
+	return w
 }

@@ -104,6 +104,10 @@ type Station struct {
 	// AimAt is the point the microphone should be aimed at (cell frame).
 	AimAt r3.Vec
 
+	// Levels are the predicted levels at the microphone, one per
+	// operating point in the order of Plan.Points.
+	Levels []Level
+
 	Status    Verdict
 	Governing string // the operating point of the worst check
 	Checks    []Check
@@ -201,7 +205,10 @@ type Plan struct {
 	Arrays       []ArrayResult
 	Stations     []Station
 	Absorption   []AbsorptionRow
-	Warnings     []string
+	// Crew is every crew position's exposure, one entry per operating
+	// point, crew positions in layout order.
+	Crew     []CrewExposure
+	Warnings []string
 	// Counts of stations by verdict.
 	OK, Warn, Blocked int
 }

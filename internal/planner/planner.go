@@ -83,6 +83,9 @@ func newChecker(req *Request, lim Limits, points []PointResult, gov int) (*check
 		return nil, fmt.Errorf("%w: the band %g–%g Hz holds no 1/3-octave band centre", ErrRequest, req.Band.Low, req.Band.High)
 	}
 	ck := &checker{req: req, lim: lim, points: points, atm: atm, bands: bands}
+	if ck.noise, err = newNoiseModel(req, points, atm); err != nil {
+		return nil, err
+	}
 	ck.c = atm.SpeedOfSound()
 	ck.lambdaLow = acoustics.Wavelength(req.Band.Low, ck.c)
 	if req.Cell.Kind == geometry.Anechoic {
@@ -340,7 +343,8 @@ func (ck *checker) summarisePlan(plan *Plan, placed []placedArray) {
 		plan.Arrays = append(plan.Arrays, pa.res)
 	}
 	plan.Absorption = ck.absorptionTable(plan.Arrays, plan.Stations)
-	plan.Warnings = ck.warnings(ck.atm)
+	plan.Crew = ck.crewExposures()
+	plan.Warnings = append(ck.warnings(ck.atm), ck.noiseWarnings(plan)...)
 }
 
 func indexOf(points []PointResult, name string) int {

@@ -7,6 +7,7 @@ import (
 	"github.com/paulmach/orb"
 	"gonum.org/v1/gonum/spatial/r3"
 
+	"arcwright/internal/acoustics"
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
 	"arcwright/internal/units"
@@ -89,6 +90,8 @@ type Stand struct {
 	// 0 puts the microphone on top of the pole. The pole stands on the side
 	// of the microphone away from the jet.
 	BoomLength float64
+	// Microphone is the microphone the stand carries; nil: none named.
+	Microphone *acoustics.Microphone
 }
 
 // Limits are the thresholds and margins of the checks. The zero value of a
@@ -241,6 +244,9 @@ type Array struct {
 
 	// Points and Probes.
 	Fixed []Fixed
+
+	// Microphone is the microphone the array uses; nil: the stand's, or none named.
+	Microphone *acoustics.Microphone
 }
 
 // SheetOptions are the layout's wishes for the printed sheet.
@@ -271,6 +277,10 @@ type Request struct {
 	Stands     []Stand
 	Arrays     []Array
 	Sheet      SheetOptions
+	// Noise is the room's acoustics and the contours to draw.
+	Noise Noise
+	// Crew are the places where people stay during runs.
+	Crew []Crew
 	// AsBuilt replaces planned positions by measured ones, by station ID:
 	// the check command's as-built positions. Every key must name a
 	// station of the plan.

@@ -1,0 +1,162 @@
+package planner
+
+import (
+	"math"
+	"strings"
+	"testing"
+
+	"gonum.org/v1/gonum/spatial/r3"
+
+	"arcwright/internal/acoustics"
+	"arcwright/internal/geometry"
+)
+
+// freeRoom returns a request with one microphone on a post 3 m to the side
+// of the jet's source position, in an anechoic room over a treated floor
+// (no floor image, no reverberant field).
+func freeRoom(t *testing.T) (*Request, float64) {
+	t.Helper()
+	req := point(r3.Vec{})
+	req.Cell.Kind, req.CutOff = geometry.Anechoic, 100
+	probe := mustPlan(t, req)
+	lc := probe.Points[0].CoreNominal
+	req.Arrays[0].Fixed[0].At = r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 3, Z: req.Exit.Exit.Z}
+	return req, lc
+}
+
+// TestStationLevels checks that a station's level is the source's level at
+// the microphone seen from the end of the nominal core, and that the
+// reported OASPL check is the loudest point.
+func TestStationLevels(t *testing.T) {
+	req, _ := freeRoom(t)
+	p := mustPlan(t, req)
+	st := p.Stations[0]
+	if len(st.Levels) != len(p.Points) {
+		t.Fatalf("got %d levels, want one per point (%d)", len(st.Levels), len(p.Points))
+	}
+	atm := acoustics.Atmosphere{Temperature: req.Ambient.Temperature, RelativeHumidity: req.Ambient.Humidity, Pressure: req.Ambient.Pressure}
+	j := NoiseJet(p.Points[0].Exit)
+	src, err := acoustics.NewNoiseSource(j, atm, acoustics.NoiseBands(j))
+	if err != nil {
+		t.Fatal(err)
+	}
+	// hand-computed geometry: 3 m from the source at 90° from the axis
+	want, err := src.At(acoustics.Path{Distance: 3, Polar: math.Pi / 2}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got := st.Levels[0]; math.Abs(got.OASPL-want.OASPL) > 1e-6 || math.Abs(got.AWeighted-want.AWeighted) > 1e-6 {
+		t.Errorf("got %+v, want %.3f dB, %.3f dB(A)", got, want.OASPL, want.AWeighted)
+	}
+	c := check(t, p, CheckLevel)
+	if c.Value != st.Levels[0].OASPL || c.Point != p.Points[0].Name || c.Verdict != OK {
+		t.Errorf("got check %+v, want the loudest level %.3f dB, ok", c, st.Levels[0].OASPL)
+	}
+}
+
+// TestMicrophoneFitCheck checks the warning of a microphone whose level or
+// frequency limit is too low: margin = limit − (OASPL + 15 dB crest
+// allowance), hand-computed from the predicted level.
+func TestMicrophoneFitCheck(t *testing.T) {
+	req, _ := freeRoom(t)
+	l := check(t, mustPlan(t, req), CheckLevel).Value
+	tests := []struct {
+		name string
+		mic  acoustics.Microphone
+		want Verdict
+		says string
+	}{
+		{"fits", acoustics.Microphone{Name: "big", MaxLevel: l + 20, UpperFrequency: 100e3}, OK, "leaves 5 dB"},
+		{"overloads", acoustics.Microphone{Name: "small", MaxLevel: l + 10, UpperFrequency: 100e3}, Warn, "exceeds the small microphone's"},
+		{"too slow", acoustics.Microphone{Name: "slow", MaxLevel: l + 40, UpperFrequency: 10e3}, Warn, "above the slow microphone's 10 kHz"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			r, _ := freeRoom(t)
+			m := tt.mic
+			r.Arrays[0].Microphone = &m
+			c := check(t, mustPlan(t, r), CheckLevel)
+			if c.Verdict != tt.want || !strings.Contains(c.Reason, tt.says) {
+				t.Errorf("got %v %q, want %v saying %q", c.Verdict, c.Reason, tt.want, tt.says)
+			}
+		})
+	}
+	// the stand's microphone applies when the array names none
+	r, _ := freeRoom(t)
+	r.Stands[0].Microphone = &acoustics.Microphone{Name: "small", MaxLevel: l, UpperFrequency: 100e3}
+	if c := check(t, mustPlan(t, r), CheckLevel); c.Verdict != Warn {
+		t.Errorf("stand's microphone: got %v, want warn", c.Verdict)
+	}
+}
+
+// TestRoomLevels checks the reverberant field of a hard-walled room: with
+// less absorption the level rises, the assumed absorption is warned, and a
+// reverberation time gives ᾱ by Sabine's formula (hand-computed:
+// 10 × 10 × 5 m room, V = 500 m³, S = 400 m², T60 = 1 s: ᾱ = 0.20125).
+func TestRoomLevels(t *testing.T) {
+	level := func(n Noise) (float64, *Plan) {
+		req, _ := freeRoom(t)
+		req.Cell.Kind = geometry.HardWalled
+		req.Noise = n
+		p := mustPlan(t, req)
+		return check(t, p, CheckLevel).Value, p
+	}
+	dead, _ := level(Noise{RoomAbsorption: 0.5})
+	live, p := level(Noise{})
+	if !(live > dead) {
+		t.Errorf("got %.2f dB with ᾱ = 0.02 and %.2f dB with 0.5, want more in the live room", live, dead)
+	}
+	found := false
+	for _, w := range p.Warnings {
+		found = found || strings.Contains(w, "absorption is not given")
+	}
+	if !found {
+		t.Errorf("no warning about the assumed absorption: %v", p.Warnings)
+	}
+	sab, _ := level(Noise{Reverberation: 1})
+	same, _ := level(Noise{RoomAbsorption: 0.161 * 500 / 400})
+	if math.Abs(sab-same) > 1e-9 {
+		t.Errorf("T60 1 s: got %.4f dB, want %.4f dB (ᾱ = 0.20125)", sab, same)
+	}
+	req, _ := freeRoom(t)
+	req.Cell.Kind = geometry.HardWalled
+	req.Noise = Noise{Reverberation: 0.01}
+	if _, err := New(req); err == nil {
+		t.Error("T60 0.01 s (ᾱ > 1): got no error")
+	}
+}
+
+// TestCrewExposure checks the crew table against the EU 2003/10/EC values
+// and the NIOSH allowed time (acoustics.md §7.1, CONFIRMED): the status
+// follows the level at the position and the hours spent there.
+func TestCrewExposure(t *testing.T) {
+	req, lc := freeRoom(t)
+	near := r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 0.5, Z: req.Exit.Exit.Z}
+	req.Crew = []Crew{{Name: "near", At: near, Hours: 8}, {Name: "brief", At: near, Hours: 1.0 / 3600}}
+	p := mustPlan(t, req)
+	if len(p.Crew) != 2*len(p.Points) {
+		t.Fatalf("got %d crew entries, want %d", len(p.Crew), 2*len(p.Points))
+	}
+	for _, e := range p.Crew {
+		wantAllowed := 8 / math.Pow(2, (e.AWeighted-85)/3)
+		if math.Abs(e.AllowedHours-wantAllowed) > 1e-9*wantAllowed {
+			t.Errorf("%s: got %.4g h allowed, want %.4g h", e.Name, e.AllowedHours, wantAllowed)
+		}
+		lex := e.AWeighted + 10*math.Log10(e.Hours/8)
+		var want Verdict
+		switch {
+		case lex >= 87 || e.Peak >= 140 || e.Hours > e.AllowedHours:
+			want = Blocked
+		case lex >= 80 || e.Peak >= 135:
+			want = Warn
+		default:
+			want = OK
+		}
+		if e.Status != want || math.Abs(e.DailyExposure-lex) > 1e-9 {
+			t.Errorf("%s: %.1f dB(A) for %g h (L_EX,8h %.1f), peak %.1f: got %v, want %v", e.Name, e.AWeighted, e.Hours, e.DailyExposure, e.Peak, e.Status, want)
+		}
+	}
+	if p.Crew[0].Status != Blocked {
+		t.Errorf("8 h at %.0f dB(A): got %v, want blocked", p.Crew[0].AWeighted, p.Crew[0].Status)
+	}
+}
