@@ -47,8 +47,9 @@ marked stale; fixing the file brings the plan back.
 
 The first line of output is the address to open, 'serving http://HOST:PORT/'.
 The server listens on this computer only (127.0.0.1) unless --addr names
-another interface, which is printed as a warning; it serves this one layout,
-read-only, and needs no internet access. Ctrl-C stops it.
+another interface, which is printed as a warning (on loopback it answers only
+requests addressed to localhost); it serves this one layout, read-only, and
+needs no internet access. Ctrl-C stops it.
 
 Besides the page: /plan.json (as 'plan --format json'; 422 with the errors
 while the layout is bad), /plan.svg, /sheet.pdf and /events (Server-Sent
@@ -108,7 +109,11 @@ func runServe(ctx context.Context, o *ServeOptions, stdout, stderr io.Writer) er
 		return fmt.Errorf("--addr %s: %w (pick another port, or :0 for a free one)", o.Addr, err)
 	}
 	srv := preview.New(o.Layout)
-	hs := &http.Server{Handler: srv.Handler(), ReadHeaderTimeout: 10 * time.Second}
+	h := srv.Handler()
+	if loopback {
+		h = preview.LoopbackOnly(h)
+	}
+	hs := &http.Server{Handler: h, ReadHeaderTimeout: 10 * time.Second}
 	fmt.Fprintf(stdout, "serving http://%s/\n", ln.Addr().String())
 	if !loopback {
 		fmt.Fprintf(stderr, "arcwright: warning: listening on %s, which other computers can reach; the plan is served to anyone who asks. Use --addr 127.0.0.1:PORT to keep it on this computer.\n", addr)

@@ -4,6 +4,7 @@ import (
 	"embed"
 	"encoding/json"
 	"fmt"
+	"net"
 	"net/http"
 	"strconv"
 	"time"
@@ -196,4 +197,27 @@ func (s *Server) events(w http.ResponseWriter, r *http.Request) {
 			fl.Flush()
 		}
 	}
+}
+
+// LoopbackOnly wraps h so that it answers only requests addressed to this
+// computer: a Host of "localhost" or a loopback address, with any port.
+// Others get 403, so that a web page elsewhere that points its own name at
+// 127.0.0.1 cannot read the plan through the visitor's browser. Use it when
+// the server listens on loopback.
+func LoopbackOnly(h http.Handler) http.Handler {
+	return http.HandlerFunc(func(w http.ResponseWriter, r *http.Request) {
+		host := r.Host
+		if hh, _, err := net.SplitHostPort(host); err == nil {
+			host = hh
+		}
+		ok := host == "localhost"
+		if ip := net.ParseIP(host); ip != nil {
+			ok = ip.IsLoopback()
+		}
+		if !ok {
+			http.Error(w, "this preview answers requests for localhost only", http.StatusForbidden)
+			return
+		}
+		h.ServeHTTP(w, r)
+	})
 }

@@ -5,6 +5,7 @@ import (
 	"bytes"
 	"encoding/json"
 	"net/http"
+	"net/http/httptest"
 	"os"
 	"strings"
 	"testing"
@@ -291,4 +292,32 @@ func httptestServer(t *testing.T, s *preview.Server) string {
 	hs := httptestNew(s)
 	t.Cleanup(func() { s.Close(); hs.Close() })
 	return hs.URL
+}
+
+func TestLoopbackOnly(t *testing.T) {
+	path, _ := copyLayout(t)
+	s := preview.New(path)
+	defer s.Close()
+	h := preview.LoopbackOnly(s.Handler())
+	for _, tc := range []struct {
+		host string
+		want int
+	}{
+		{"127.0.0.1:8570", http.StatusOK},
+		{"localhost:8570", http.StatusOK},
+		{"[::1]:8570", http.StatusOK},
+		{"localhost", http.StatusOK},
+		{"attacker.example:8570", http.StatusForbidden},
+		{"192.168.1.20:8570", http.StatusForbidden},
+	} {
+		t.Run(tc.host, func(t *testing.T) {
+			r := httptest.NewRequest(http.MethodGet, "/status.json", nil)
+			r.Host = tc.host
+			rec := httptest.NewRecorder()
+			h.ServeHTTP(rec, r)
+			if rec.Code != tc.want {
+				t.Errorf("got %d, want %d", rec.Code, tc.want)
+			}
+		})
+	}
 }
