@@ -71,6 +71,12 @@
     if (svg !== null) showDrawing(svg);
     const stale = !status.current;
     showProblems(status.errors || []);
+    $("stale-note").textContent = status.has_plan
+      ? "Until they are fixed, the drawing and tables below are the last good plan, not the file as it is now."
+      : "The file has not planned since the server started, so there is nothing to draw yet. Fix the problems and save.";
+    if (!status.has_plan) $("svg-holder").replaceChildren(el("p", { class: "empty" }, "No drawing yet: the layout has problems (listed above)."));
+    document.querySelector(".tables").classList.toggle("none", !plan);
+    $("zones-pick").classList.toggle("none", !status.has_plan);
     $("drawing").dataset.stale = String(stale && status.has_plan);
     document.querySelector(".tables").classList.toggle("stale", stale);
     if (stale) setState("stale", status.has_plan ? "stale: layout has errors" : "layout has errors");
