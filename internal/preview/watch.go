@@ -19,49 +19,56 @@ const (
 	// poll is how often the file's size and time are compared as well,
 	// for file systems that send no events.
 	poll = 2 * time.Second
+	// pollOnly is how often they are compared when the folder cannot be
+	// watched at all (no folder yet, or the system's watches used up).
+	pollOnly = 250 * time.Millisecond
 )
 
 // Watch re-plans the file each time it changes until ctx is done, and
 // returns ctx's error then. It watches the file's directory, not the file,
 // and picks the events by name: an editor that saves by writing a new file
 // and renaming it over the old one replaces the file a watch on the file
-// itself would follow. It returns an error at once when the directory
-// cannot be watched.
+// itself would follow. When the folder cannot be watched (it does not
+// exist yet, or the system has no watches left), Watch falls back to
+// comparing the file's size and modification time four times a second.
 func (s *Server) Watch(ctx context.Context) error {
-	w, err := fsnotify.NewWatcher()
-	if err != nil {
-		return fmt.Errorf("preview: watching %s: %w", s.path, err)
-	}
-	defer w.Close()
 	abs, err := filepath.Abs(s.path)
 	if err != nil {
 		return fmt.Errorf("preview: watching %s: %w", s.path, err)
 	}
 	dir, name := filepath.Split(abs)
-	if err := w.Add(dir); err != nil {
-		return fmt.Errorf("preview: watching the folder of %s: %w", s.path, err)
+	var events <-chan fsnotify.Event
+	var errs <-chan error
+	every := pollOnly
+	if w, err := fsnotify.NewWatcher(); err == nil {
+		defer w.Close()
+		if err := w.Add(dir); err == nil {
+			events, errs, every = w.Events, w.Errors, poll
+		}
 	}
 	// a change between the first plan and the watch's start
 	s.Reload()
 	timer := time.NewTimer(time.Hour)
 	timer.Stop()
-	tick := time.NewTicker(poll)
+	tick := time.NewTicker(every)
 	defer tick.Stop()
 	last := stamp(abs)
 	for {
 		select {
 		case <-ctx.Done():
 			return ctx.Err()
-		case ev, ok := <-w.Events:
+		case ev, ok := <-events:
 			if !ok {
-				return ctx.Err()
+				events = nil
+				continue
 			}
 			if filepath.Base(ev.Name) == name {
 				timer.Reset(settle)
 			}
-		case _, ok := <-w.Errors:
+		case _, ok := <-errs:
 			if !ok {
-				return ctx.Err()
+				errs = nil
+				continue
 			}
 			// an overflowed queue loses events: plan again to be sure
 			timer.Reset(settle)

@@ -67,3 +67,33 @@ func TestWatch(t *testing.T) {
 		})
 	}
 }
+
+// A folder that cannot be watched (here: it does not exist yet) is polled
+// instead: the file appears and plans within a second.
+func TestWatchWithoutEvents(t *testing.T) {
+	data, err := os.ReadFile(demo)
+	if err != nil {
+		t.Fatal(err)
+	}
+	dir := filepath.Join(t.TempDir(), "later")
+	path := filepath.Join(dir, "cell.yaml")
+	_, hs := serve(t, path)
+	if res, _ := get(t, hs.URL+"/plan.json"); res.StatusCode != 422 {
+		t.Fatalf("before the file exists: got %d, want 422", res.StatusCode)
+	}
+	if err := os.MkdirAll(dir, 0o755); err != nil {
+		t.Fatal(err)
+	}
+	writeFile(t, path, string(data))
+	deadline := time.Now().Add(time.Second)
+	for {
+		res, _ := get(t, hs.URL+"/plan.json")
+		if res.StatusCode == 200 {
+			return
+		}
+		if time.Now().After(deadline) {
+			t.Fatalf("/plan.json still %d 1 s after the file appeared", res.StatusCode)
+		}
+		time.Sleep(20 * time.Millisecond)
+	}
+}
