@@ -48,7 +48,7 @@ func TestDemoSheets(t *testing.T) {
 					t.Errorf("station %s not on the sheet", st.ID)
 				}
 			}
-			for _, want := range []string{"CAUTION", "hearing protection", "safety procedures", p.Request.Title.Title, p.Request.Title.Facility, "1:"} {
+			for _, want := range []string{"WARNING", "hearing protection", "safety procedures", p.Request.Title.Title, p.Request.Title.Facility, "1:"} {
 				if !strings.Contains(s, want) {
 					t.Errorf("sheet lacks %q", want)
 				}

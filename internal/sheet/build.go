@@ -28,7 +28,7 @@ const (
 	sizeBody    = 6.5 // panels and set-up steps
 	sizeTable   = 6.0 // tables
 	sizeHeading = 8.5 // section headings
-	sizeCaution = 11  // the CAUTION heading
+	sizeCaution = 11  // the signal word of the safety panel
 )
 
 // builder holds what Build works with.
@@ -50,6 +50,8 @@ type builder struct {
 	zs        zoneSet // the zones drawn
 	ranges    string  // the first range label on the plan, "" if none
 	cropped   bool    // the plan shows the region of interest, not the whole cell
+	// hazardsDrawn are the hazards marked on the plan
+	hazardsDrawn []hazard
 }
 
 // Build lays out the sheet set of plan p: pages, scale, every drawn item's

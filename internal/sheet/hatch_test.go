@@ -1,7 +1,9 @@
 package sheet
 
 import (
+	"fmt"
 	"math"
+	"sort"
 	"testing"
 )
 
@@ -47,5 +49,34 @@ func TestHatchSegments(t *testing.T) {
 	}
 	if s := hatchSegments([][]Pt{square}, 0, 0); s != nil {
 		t.Errorf("got %d segments at spacing 0, want none", len(s))
+	}
+}
+
+// TestHatchesDistinct: every kind of area has its own hatch angles or fill,
+// not only its own colour or outline, so that a black-and-white print tells
+// them apart (issue 9 item 6: the velocity zone, the keep-outs and the
+// wedge treatment shared one hatch).
+func TestHatchesDistinct(t *testing.T) {
+	areas := []Style{StyleVelocity, StyleHot, StyleKeepOut, StyleTreatment, StyleObstacle}
+	sig := func(s Style) string {
+		d, ok := s.Def()
+		if !ok {
+			t.Fatalf("style %s is not defined", s)
+		}
+		var angles []float64
+		for _, h := range d.Hatches {
+			a := math.Mod(h.Angle+180, 180)
+			angles = append(angles, a)
+		}
+		sort.Float64s(angles)
+		return fmt.Sprint(angles, d.Fill != nil)
+	}
+	seen := map[string]Style{}
+	for _, s := range areas {
+		k := sig(s)
+		if o, ok := seen[k]; ok {
+			t.Errorf("%s and %s share the hatch %s", s, o, k)
+		}
+		seen[k] = s
 	}
 }

@@ -60,6 +60,12 @@ func (v *planView) placeLabels(z zoneSet) {
 	for i := range st {
 		done[i] = v.placeText(st[i].ID, StationLabel, st[i].ID, v.idSize, v.pos[&st[i]], dirs[i], clear, nil)
 	}
+	// the hazards next: a safety mark must say what it marks
+	for _, c := range v.hazardLabels {
+		if !v.placeText(c.text, c.kind, c.of, sizeSmall, c.anchor, c.dir, c.clear, c.far) {
+			v.notes = append(v.notes, c.note)
+		}
+	}
 	for _, c := range v.callouts {
 		if !v.placeText(c.text, c.kind, c.of, sizeSmall, c.anchor, c.dir, c.clear, c.far) {
 			n := c.note

@@ -49,6 +49,9 @@ func (b *builder) column(pg *Page, notes []string) {
 	y = b.cautions(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
 	y = b.legend(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
 	y = b.notesPanel(pg, Rect{col.X + 1.5, y, col.W - 3, 0}, notes) + gapMM
+	if len(b.plan.Warnings) > 0 {
+		y = b.warningsPanel(pg, Rect{col.X + 1.5, y, col.W - 3, col.Bottom() - y}) + gapMM
+	}
 	if len(b.model.Key) > 0 {
 		if h := b.keyHeight(col.W - 3); y+h <= col.Bottom() {
 			b.keyPanel(pg, Rect{col.X + 1.5, y, col.W - 3, h})
@@ -57,7 +60,19 @@ func (b *builder) column(pg *Page, notes []string) {
 	}
 }
 
-// cautionItems are the cautions printed on sheet 1.
+// hazardStatement is the safety panel's first line: the hazard and its
+// consequence, which set the panel's level.
+const hazardStatement = "HOT, HIGH-VELOCITY JET EXHAUST: can kill or seriously injure. Loud enough to damage hearing."
+
+// signalWord is the signal word of the safety panel. Hot high-velocity
+// exhaust could result in death or serious injury if the hazard is not
+// avoided: the WARNING level of ANSI Z535.4-2007 §4.14.2, with the safety
+// orange panel and the safety alert symbol (READ in a label maker's summary
+// of ANSI Z535.4 and ISO 3864-2; not DANGER, which the standard keeps for
+// hazards that will, not could, result in death).
+const signalWord = "WARNING"
+
+// cautionItems are the safety panel's instructions on sheet 1.
 func (b *builder) cautionItems() []string {
 	pr := b.pr
 	return []string{
@@ -65,7 +80,7 @@ func (b *builder) cautionItems() []string {
 		fmt.Sprintf("The zones are predictions of the MEAN flow: turbulent gusts are well above the mean. Drawn: velocity zone where the mean velocity exceeds %s, hot zone where the total temperature exceeds %s, each with a margin of %s. The envelopes use the conservative end of the published scatter.",
 			pr.speed(b.lim.Velocity), pr.temp(b.lim.Temperature), pr.length(b.lim.Margin)),
 		b.drawnWhat() + " Every station was checked against every operating point.",
-		"NOISE: a running jet exceeds the limits of safe noise exposure. Wear hearing protection in and near the cell. Keep out of the cell during runs.",
+		"NOISE: wear hearing protection in and near the cell. Keep out of the cell during runs.",
 		"Before every run: clearances re-measured, nothing loose in the zones, cables secured outside the zones, people out of the cell, headcount done.",
 		"Nozzle, ducting and plume-side hardware stay hot after shutdown.",
 		"Follow the facility's safety procedures, local codes and licensed practice; they take precedence over this sheet.",
@@ -93,20 +108,33 @@ func (b *builder) drawnWhat() string {
 	return s + "."
 }
 
-// cautions draws the boxed cautions panel at r (its height grows to fit)
-// and returns the y of its bottom.
+// cautions draws the safety panel at r (its height grows to fit) and
+// returns the y of its bottom: a signal-word band in safety orange with the
+// safety alert symbol and the word WARNING in black (ANSI Z535.4 and
+// ISO 3864-2 panel colours; black on orange stays legible in grey print),
+// the hazard statement, and the instructions.
 func (b *builder) cautions(pg *Page, r Rect) float64 {
 	const pad = 2.5
+	const bandH = 7.5
 	sz := sizeBody
 	lh := lineHeight(sz)
-	y := r.Y + pad + capHeight(sizeCaution)
-	// our warning symbol: a red-outlined triangle with a bar and a dot
+	pg.Shapes = append(pg.Shapes, rectShape(StyleSignal, Rect{r.X, r.Y, r.W, bandH}))
+	// the safety alert symbol: a black triangle with an exclamation mark in
+	// the panel's colour
+	base := r.Y + bandH - 1.2
 	tx := r.X + pad
-	tri := []Pt{{tx + 2.4, y - 4.1}, {tx + 4.8, y}, {tx, y}}
-	pg.Shapes = append(pg.Shapes, poly(StyleCaution, tri), line(StyleStrike, Pt{tx + 2.4, y - 2.9}, Pt{tx + 2.4, y - 1.4}), circle(StyleSolid, Pt{tx + 2.4, y - 0.6}, 0.3))
-	pg.Texts = append(pg.Texts, Text{X: r.X + pad + 6.5, Y: y, Size: sizeCaution, Bold: true, Color: Red, Text: "CAUTION"})
-	y += 2.2
+	tri := []Pt{{tx + 2.8, base - 5}, {tx + 5.6, base}, {tx, base}}
+	pg.Shapes = append(pg.Shapes, poly(StyleSolid, tri),
+		poly(StyleSignalMark, []Pt{{tx + 2.45, base - 3.5}, {tx + 3.15, base - 3.5}, {tx + 2.95, base - 1.6}, {tx + 2.65, base - 1.6}}),
+		circle(StyleSignalMark, Pt{tx + 2.8, base - 0.8}, 0.38))
+	pg.Texts = append(pg.Texts, Text{X: tx + 7.5, Y: base, Size: sizeCaution, Bold: true, Text: signalWord})
+	y := r.Y + bandH + 0.8
 	indent := b.m.width("• ", sz, false)
+	for _, l := range b.m.wrap(clean(hazardStatement), r.W-2*pad, sz+0.5, true) {
+		y += lineHeight(sz + 0.5)
+		pg.Texts = append(pg.Texts, Text{X: r.X + pad, Y: y, Size: sz + 0.5, Bold: true, Text: l})
+	}
+	y += 0.8
 	for i, it := range b.cautionItems() {
 		bold := i == 0 || i == 3
 		lines := b.m.wrap(clean(it), r.W-2*pad-indent, sz, bold)
@@ -120,6 +148,60 @@ func (b *builder) cautions(pg *Page, r Rect) float64 {
 		y += 0.6
 	}
 	bottom := y + pad - 0.5
+	pg.Shapes = append(pg.Shapes, rectShape(StyleCaution, Rect{r.X, r.Y, r.W, bottom - r.Y}))
+	return bottom
+}
+
+// safetyFirst returns the plan's warnings, those about the flow leaving
+// the free-jet model (a wall jet where a zone meets a surface or an
+// obstacle, a buoyant bend) first, each group in the plan's order.
+func (b *builder) safetyFirst() []string {
+	var first, rest []string
+	for _, w := range b.plan.Warnings {
+		l := strings.ToLower(w)
+		if strings.Contains(l, "wall jet") || strings.Contains(l, "buoyan") || strings.Contains(l, "strikes") || strings.Contains(l, "reaches the") {
+			first = append(first, w)
+		} else {
+			rest = append(rest, w)
+		}
+	}
+	return append(first, rest...)
+}
+
+// warningsPanel prints the plan's warnings at r, the safety ones first,
+// as many as fit in r's height, and returns the y of its bottom. Those
+// that do not fit are counted; all are printed in full on a later sheet.
+func (b *builder) warningsPanel(pg *Page, r Rect) float64 {
+	const pad = 2.0
+	sz := sizeSmall
+	lh := lineHeight(sz)
+	y := r.Y + pad + capHeight(sizeHeading)
+	head := "WARNINGS FROM THE PLAN"
+	if len(b.hazardsDrawn) > 0 {
+		head += " (a triangle on the plan marks where)"
+	}
+	pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sizeHeading, true, head))
+	y += 0.8
+	ws := b.safetyFirst()
+	indent := b.m.width("• ", sz, false)
+	for i, w := range ws {
+		lines := b.m.wrap(clean(w), r.W-2*pad-indent, sz, false)
+		if y+float64(len(lines)+1)*lh+pad > r.Bottom() && i > 0 {
+			y += lh
+			pg.Texts = append(pg.Texts, Text{X: r.X + pad, Y: y, Size: sz, Bold: true,
+				Text: clean(plural(len(ws)-i, "more warning") + ": see PLANNER WARNINGS on a later sheet.")})
+			break
+		}
+		for j, l := range lines {
+			y += lh
+			if j == 0 {
+				pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sz, false, "•"))
+			}
+			pg.Texts = append(pg.Texts, Text{X: r.X + pad + indent, Y: y, Size: sz, Text: l})
+		}
+		y += 0.4
+	}
+	bottom := y + pad
 	pg.Shapes = append(pg.Shapes, rectShape(StyleCaution, Rect{r.X, r.Y, r.W, bottom - r.Y}))
 	return bottom
 }

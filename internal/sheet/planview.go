@@ -28,6 +28,9 @@ type planView struct {
 	refTexts []Text    // texts of the reference symbol
 	callouts []callout // dimension and coordinate callouts to place
 	angles   []callout // angle labels to place where there is room
+	// hazardLabels are the words of the warning triangles, placed before
+	// every other callout
+	hazardLabels []callout
 }
 
 // planExtent returns the cell-frame rectangle the plan must show, m: the
@@ -109,6 +112,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.floorMarks()
 	v.datum()
 	v.reference()
+	v.hazardMarks()
 	v.placeLabels(z)
 
 	b.model.Pages = append(b.model.Pages, Page{})

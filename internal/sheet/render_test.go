@@ -146,8 +146,8 @@ func TestReadBackWithPoppler(t *testing.T) {
 			"16.4 ft/s", "122.0 °F", "open sky", "50 ft",
 		}},
 	}
-	cautions := []string{"CAUTION", "HOT-EXHAUST AND HIGH-VELOCITY ZONES", "MEAN flow", "hearing protection",
-		"Keep out of the cell during runs", "safety procedures, local codes and licensed practice"}
+	cautions := []string{"WARNING", "can kill or seriously injure", "HOT-EXHAUST AND HIGH-VELOCITY ZONES", "MEAN flow", "hearing protection",
+		"Keep out of the cell", "safety procedures, local codes and licensed practice"}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
 			p := tt.plan(t)
@@ -174,8 +174,93 @@ func TestReadBackWithPoppler(t *testing.T) {
 			}
 			// the cautions are on the first page
 			first := strings.SplitN(text, "\f", 2)[0]
-			if !strings.Contains(first, "CAUTION") || !strings.Contains(first, "hearing protection") {
+			if !strings.Contains(first, "WARNING") || !strings.Contains(first, "hearing protection") {
 				t.Error("the cautions are not on the first page")
+			}
+		})
+	}
+}
+
+// TestSignalWordPanel: sheet 1's safety panel carries the signal word of
+// the hazard's level with that level's colour and the safety alert symbol:
+// hot high-velocity exhaust could kill or seriously injure, which is
+// WARNING on safety orange in ANSI Z535.4-2007 §4.14.2 and ISO 3864-2
+// (READ in a label maker's summary of both standards), not a red CAUTION
+// (issue 9 item 6).
+func TestSignalWordPanel(t *testing.T) {
+	m := build(t, chamberPlan(t), sheet.Options{})
+	pg := m.Pages[0]
+	var word, hazard bool
+	for _, tx := range pg.Texts {
+		if tx.Text == "WARNING" && tx.Bold && tx.Color == sheet.Black {
+			word = true
+		}
+		if strings.Contains(tx.Text, "can kill or seriously injure") {
+			hazard = true
+		}
+		if strings.Contains(tx.Text, "CAUTION") || strings.Contains(tx.Text, "DANGER") {
+			t.Errorf("sheet 1 says %q: the level of this hazard is WARNING", tx.Text)
+		}
+	}
+	if !word || !hazard {
+		t.Errorf("got signal word %v and hazard statement %v, want both", word, hazard)
+	}
+	band := false
+	for _, sh := range pg.Shapes {
+		if sh.Style == sheet.StyleSignal {
+			band = true
+		}
+	}
+	if !band {
+		t.Error("no signal-word band on sheet 1")
+	}
+	d, _ := sheet.StyleSignal.Def()
+	if c := d.Fill; c == nil || !(c[0] > 200 && c[1] > 80 && c[1] < 160 && c[2] < 60) {
+		t.Errorf("got signal band fill %v, want safety orange", d.Fill)
+	}
+}
+
+// TestWarningsOnSheetOne: the plan's warnings are on sheet 1, and the
+// places where a drawn zone meets a surface (a wall jet) or buoyancy bends
+// the jet are marked on the plan with a triangle and words (issue 9 item 6:
+// they were only in small print on the last sheet).
+func TestWarningsOnSheetOne(t *testing.T) {
+	for _, tt := range []struct {
+		name string
+		plan func(testing.TB) *planner.Plan
+	}{{"chamber", chamberPlan}, {"pad", func(t testing.TB) *planner.Plan { return padPlan(t, 60) }}} {
+		t.Run(tt.name, func(t *testing.T) {
+			p := tt.plan(t)
+			p.Warnings = append(p.Warnings, "P: the velocity zone reaches the floor about 9 m downstream of the exit: the exhaust spreads along it there as a wall jet")
+			m := build(t, p, sheet.Options{})
+			pg := m.Pages[0]
+			var words []string
+			for _, tx := range pg.Texts {
+				words = append(words, tx.Text)
+			}
+			text := strings.Join(strings.Fields(strings.Join(words, " ")), " ")
+			if !strings.Contains(text, "WARNINGS FROM THE PLAN") {
+				t.Fatal("sheet 1 has no warnings panel")
+			}
+			if !strings.Contains(text, "as a wall jet") {
+				t.Error("the wall-jet warning is not on sheet 1")
+			}
+			marks := 0
+			for _, v := range pg.Views {
+				for _, sh := range v.Shapes {
+					if sh.Style == sheet.StyleHazard {
+						marks++
+					}
+				}
+			}
+			labels := 0
+			for _, l := range pg.Labels {
+				if l.For == "warning" && strings.Contains(l.Text, "wall jet") {
+					labels++
+				}
+			}
+			if marks == 0 || labels == 0 {
+				t.Errorf("got %d warning triangles and %d wall-jet labels on the plan, want some of each", marks, labels)
 			}
 		})
 	}

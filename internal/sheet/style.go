@@ -3,17 +3,24 @@ package sheet
 // Style names how a shape is drawn: its pen, fill and hatching.
 type Style string
 
-// Styles. Zones differ by line pattern and hatching as well as colour, so a
-// black-and-white print still tells them apart.
+// Styles. Areas differ by outline pattern and by hatch angle and spacing as
+// well as colour, so a black-and-white print still tells them apart: the
+// velocity zone sparse lines at 30° with a solid outline, the hot zone
+// dense lines at −60° with a dashed outline, keep-out zones a square
+// cross-hatch with a chain outline, the treatment fine grey lines at −45°,
+// obstacles a plain grey fill.
 const (
 	StyleFrame      Style = "frame"         // sheet border
 	StyleBox        Style = "box"           // panel and title-block lines
-	StyleCaution    Style = "caution"       // the heavy border of the cautions panel
+	StyleCaution    Style = "caution"       // the heavy border of the safety panel
+	StyleSignal     Style = "signal"        // the signal-word band of the safety panel: safety orange fill
+	StyleSignalMark Style = "signal.mark"   // the exclamation mark inside the safety alert symbol: safety orange fill
+	StyleHazard     Style = "hazard"        // the warning triangle where a zone meets a surface: safety orange, black outline
 	StyleGrid       Style = "grid"          // the light coordinate grid
 	StyleBoundary   Style = "boundary"      // the cell boundary, thick
-	StyleTreatment  Style = "treatment"     // the treatment behind the boundary: thin, light hatching
+	StyleTreatment  Style = "treatment"     // the treatment behind the boundary: thin, light hatching at −45°
 	StyleObstacle   Style = "obstacle"      // obstacles: solid outline, grey fill
-	StyleKeepOut    Style = "keepout"       // keep-out zones: chain outline, diagonal hatching at 45°
+	StyleKeepOut    Style = "keepout"       // keep-out zones: chain outline, square cross-hatching
 	StyleVelocity   Style = "zone.velocity" // velocity zone: solid outline, sparse hatching at 30°
 	StyleHot        Style = "zone.hot"      // hot zone: dashed outline, dense hatching at −60°
 	StyleMargin     Style = "zone.margin"   // the margin band around a zone: dotted
@@ -75,6 +82,9 @@ var (
 	keepPlum  = RGB{110, 50, 120}
 	arrayTeal = RGB{0, 110, 100}
 	headFill  = RGB{235, 235, 235}
+	// safetyOrange approximates the safety orange of ANSI Z535.1, the
+	// colour of the WARNING signal word panel (FROM MEMORY)
+	safetyOrange = RGB{245, 120, 20}
 )
 
 func fill(c RGB) *RGB { return &c }
@@ -82,12 +92,15 @@ func fill(c RGB) *RGB { return &c }
 var styles = map[Style]StyleDef{
 	StyleFrame:      {Pen: Pen{Width: 0.5, Color: black}},
 	StyleBox:        {Pen: Pen{Width: 0.25, Color: black}},
-	StyleCaution:    {Pen: Pen{Width: 1.0, Color: hotRed}},
+	StyleCaution:    {Pen: Pen{Width: 0.8, Color: black}},
+	StyleSignal:     {Fill: fill(safetyOrange)},
+	StyleSignalMark: {Fill: fill(safetyOrange)},
+	StyleHazard:     {Pen: Pen{Width: 0.25, Color: black}, Fill: fill(safetyOrange)},
 	StyleGrid:       {Pen: Pen{Width: 0.1, Color: gridGrey}},
 	StyleBoundary:   {Pen: Pen{Width: 0.7, Color: black}},
-	StyleTreatment:  {Pen: Pen{Width: 0.15, Color: midGrey}, Hatches: []Hatch{{Angle: 45, Spacing: 1.0, Pen: Pen{Width: 0.08, Color: midGrey}}}},
+	StyleTreatment:  {Pen: Pen{Width: 0.15, Color: midGrey}, Hatches: []Hatch{{Angle: -45, Spacing: 0.9, Pen: Pen{Width: 0.08, Color: midGrey}}}},
 	StyleObstacle:   {Pen: Pen{Width: 0.35, Color: black}, Fill: fill(lightFill)},
-	StyleKeepOut:    {Pen: Pen{Width: 0.3, Dash: []float64{3, 0.8, 0.4, 0.8}, Color: keepPlum}, Hatches: []Hatch{{Angle: 45, Spacing: 1.6, Pen: Pen{Width: 0.12, Color: keepPlum}}}},
+	StyleKeepOut:    {Pen: Pen{Width: 0.3, Dash: []float64{3, 0.8, 0.4, 0.8}, Color: keepPlum}, Hatches: []Hatch{{Angle: 0, Spacing: 1.8, Pen: Pen{Width: 0.12, Color: keepPlum}}, {Angle: 90, Spacing: 1.8, Pen: Pen{Width: 0.12, Color: keepPlum}}}},
 	StyleVelocity:   {Pen: Pen{Width: 0.35, Color: velBlue}, Hatches: []Hatch{{Angle: 30, Spacing: 2.5, Pen: Pen{Width: 0.12, Color: velBlue}}}},
 	StyleHot:        {Pen: Pen{Width: 0.4, Dash: []float64{1.6, 0.8}, Color: hotRed}, Hatches: []Hatch{{Angle: -60, Spacing: 1.1, Pen: Pen{Width: 0.12, Color: hotRed}}}},
 	StyleMargin:     {Pen: Pen{Width: 0.35, Dash: []float64{0, 0.9}, Round: true, Color: black}},
