@@ -9,6 +9,7 @@ import (
 	"strconv"
 	"strings"
 	"text/tabwriter"
+	"unicode"
 
 	"github.com/spf13/cobra"
 	"github.com/spf13/pflag"
@@ -156,6 +157,10 @@ type airJSON struct {
 type airPath struct {
 	Label  string  `json:"label"`
 	Metres float64 `json:"metres"`
+
+	array    string // the array's name; "" for a --distance
+	mean     bool   // the array's mean distance, not its radius
+	imperial bool   // the layout is in feet and inches
 }
 
 type airRow struct {
@@ -178,7 +183,7 @@ func airFromPlan(p *planner.Plan) airTable {
 		if arr.Kind != planner.Arc {
 			label += " (mean)"
 		}
-		t.Paths = append(t.Paths, airPath{Label: label, Metres: d})
+		t.Paths = append(t.Paths, airPath{Label: label, Metres: d, array: arr.Name, mean: arr.Kind != planner.Arc, imperial: p.Request.System() == units.Imperial})
 	}
 	for _, r := range p.Absorption {
 		t.Rows = append(t.Rows, airRow{Nominal: r.Band.Nominal, Centre: r.Band.Centre, PerM: r.PerM, Loss: r.ArrayDB})
@@ -189,8 +194,13 @@ func airFromPlan(p *planner.Plan) airTable {
 func airCSV(w io.Writer, t airTable) error {
 	cw := csv.NewWriter(w)
 	head := []string{"band", "frequency_hz", "db_per_m"}
+	seen := map[string]int{}
 	for _, p := range t.Paths {
-		head = append(head, fmt.Sprintf("loss_db_%s", strings.ReplaceAll(p.Label, " ", "_")))
+		h := p.csvColumn()
+		if seen[h]++; seen[h] > 1 {
+			h += fmt.Sprintf("_%d", seen[h])
+		}
+		head = append(head, h)
 	}
 	cw.Write(head)
 	for _, r := range t.Rows {
@@ -202,6 +212,31 @@ func airCSV(w io.Writer, t airTable) error {
 	}
 	cw.Flush()
 	return cw.Error()
+}
+
+// csvColumn names the loss column of path p so that it imports cleanly
+// into a spreadsheet, a data frame or a database: only letters, digits and
+// underscores, the path in whole millimetres (whole inches for a layout in
+// feet and inches), such as loss_db_3000mm, loss_db_A_4113mm or
+// loss_db_S_mean_3124mm.
+func (p airPath) csvColumn() string {
+	length := fmt.Sprintf("%.0fmm", p.Metres*1000)
+	if p.imperial {
+		length = fmt.Sprintf("%.0fin", p.Metres/units.Inch)
+	}
+	if p.array == "" {
+		return "loss_db_" + length
+	}
+	name := strings.Map(func(r rune) rune {
+		if r < 128 && (unicode.IsLetter(r) || unicode.IsDigit(r)) {
+			return r
+		}
+		return '_'
+	}, p.array)
+	if p.mean {
+		name += "_mean"
+	}
+	return "loss_db_" + name + "_" + length
 }
 
 func airText(w io.Writer, t airTable) error {

@@ -8,16 +8,37 @@ import (
 	"strings"
 
 	"arcwright/internal/planner"
+	"arcwright/internal/units"
 )
 
-// csvHeader is the header row of the station table.
-var csvHeader = []string{
+// csvColumns are the columns of the station table; a name ending in "_"
+// is a length and takes the unit suffix of the plan's unit system ("m" or
+// "ft").
+var csvColumns = []string{
 	"id", "channel", "array", "kind",
-	"x_m", "y_m", "z_m", "base_x_m", "base_y_m", "height_m",
-	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg",
+	"x_", "y_", "z_", "base_x_", "base_y_", "height_",
+	"radius_", "nominal_radius_", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg",
 	"stand", "aim", "status", "governing_point",
-	"velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m",
+	"velocity_clearance_", "velocity_point", "hot_clearance_", "hot_point", "wall_clearance_",
 	"oaspl_db", "reasons",
+}
+
+// CSVHeader returns the header row of the station table in unit system
+// sys: lengths in metres ("x_m") for a metric plan, in decimal feet
+// ("x_ft") for an imperial one.
+func CSVHeader(sys units.System) []string {
+	suffix := "m"
+	if sys == units.Imperial {
+		suffix = "ft"
+	}
+	out := make([]string, len(csvColumns))
+	for i, c := range csvColumns {
+		if strings.HasSuffix(c, "_") {
+			c += suffix
+		}
+		out[i] = c
+	}
+	return out
 }
 
 // checkPoint returns the operating point that governs the check named
@@ -39,8 +60,14 @@ const reasonSeparator = "; "
 //	velocity_clearance_m, velocity_point, hot_clearance_m, hot_point,
 //	wall_clearance_m, oaspl_db, reasons
 //
-// Lengths are metres with 4 decimals and angles degrees with 2. radius_m
-// and polar_deg are as placed: the microphone's true distance and polar
+// The lengths are in the plan's unit system, the same as its reasons: in
+// metres with 4 decimals (columns ending in _m) for a metric plan, in
+// decimal feet with 4 decimals (_ft) for an imperial one; angles are
+// degrees with 2 decimals. x, y and z are the microphone (or probe tip) in
+// the cell frame, whose z is measured up from the floor; height is the same
+// number, the microphone's height above the floor, for data systems that
+// ask for a height (an as-built file may give either); base_x and base_y
+// are the stand pole in plan. radius_m and polar_deg are as placed: the microphone's true distance and polar
 // angle from its array's centre on the axis (arcs) or from the nozzle exit;
 // nominal_radius_m and nominal_polar_deg are what the layout asks for (an
 // arc's radius and angle in its own plane, a ring's radius; empty where the
@@ -52,8 +79,9 @@ const reasonSeparator = "; "
 // operating point (dB, 2 decimals). A NaN or ±Inf value, or a check the
 // station does not have, gives
 // an empty cell. stand is empty for a microphone flush on the floor and
-// channel is 0 for a probe stand. Reasons are joined with "; ". Rows end
-// in "\n" (encoding/csv quoting).
+// channel is empty for a probe stand, which has none (0 is a real channel
+// on many systems). Reasons are joined with "; ". Rows end in "\n"
+// (encoding/csv quoting).
 //
 // It returns an error wrapping [ErrNoPlan] when p or p.Request is nil,
 // wrapping [ErrInvalidPlan] when p cannot be written, and the error of w.
@@ -62,24 +90,30 @@ func CSV(w io.Writer, p *planner.Plan) error {
 		return err
 	}
 	conv, _ := conventionName(p.Request.Convention)
+	sys := p.Request.System()
+	header := CSVHeader(sys)
+	length := cellMetres
+	if sys == units.Imperial {
+		length = func(m float64) string { return cellMetres(m / units.Foot) }
+	}
 	cw := csv.NewWriter(w)
-	if err := cw.Write(csvHeader); err != nil {
+	if err := cw.Write(header); err != nil {
 		return fmt.Errorf("export: writing CSV: %w", err)
 	}
-	row := make([]string, len(csvHeader))
+	row := make([]string, len(header))
 	for i := range p.Stations {
 		s := &p.Stations[i]
 		status, _ := verdictName(s.Status)
 		row = append(row[:0],
-			s.ID, strconv.Itoa(s.Channel), s.Array, kindName(s.Kind),
-			cellMetres(s.Mic.X), cellMetres(s.Mic.Y), cellMetres(s.Mic.Z),
-			cellMetres(s.Base[0]), cellMetres(s.Base[1]), cellMetres(s.Height),
-			cellMetres(s.Radius), cellMetres(p.NominalRadius(s)), cellDegrees(s.Polar), cellDegrees(s.Nominal),
+			s.ID, channel(s), s.Array, kindName(s.Kind),
+			length(s.Mic.X), length(s.Mic.Y), length(s.Mic.Z),
+			length(s.Base[0]), length(s.Base[1]), length(s.Height),
+			length(s.Radius), length(p.NominalRadius(s)), cellDegrees(s.Polar), cellDegrees(s.Nominal),
 			conv, cellDegrees(s.Jet.Azimuth),
 			standName(s), aimName(s.Incidence), status, s.Governing,
-			cellMetres(checkValue(s, planner.CheckVelocity)), checkPoint(s, planner.CheckVelocity),
-			cellMetres(checkValue(s, planner.CheckHot)), checkPoint(s, planner.CheckHot),
-			cellMetres(checkValue(s, planner.CheckWall)),
+			length(checkValue(s, planner.CheckVelocity)), checkPoint(s, planner.CheckVelocity),
+			length(checkValue(s, planner.CheckHot)), checkPoint(s, planner.CheckHot),
+			length(checkValue(s, planner.CheckWall)),
 			cellFixed(checkValue(s, planner.CheckLevel), levelDecimals),
 			strings.Join(s.Reasons, reasonSeparator),
 		)
@@ -92,4 +126,13 @@ func CSV(w io.Writer, p *planner.Plan) error {
 		return fmt.Errorf("export: writing CSV: %w", err)
 	}
 	return nil
+}
+
+// channel returns a station's data-system channel, and "" for a probe
+// stand, which has none (0 is a real channel on many systems).
+func channel(s *planner.Station) string {
+	if s.Kind == planner.Probes {
+		return ""
+	}
+	return strconv.Itoa(s.Channel)
 }

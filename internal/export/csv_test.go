@@ -10,6 +10,7 @@ import (
 
 	"arcwright/internal/export"
 	"arcwright/internal/planner"
+	"arcwright/internal/units"
 )
 
 // csvColumns is the column list of the task's contract, spelled out here
@@ -101,7 +102,7 @@ func TestCSVValues(t *testing.T) {
 		{3, "aim", "grazing"},
 		{3, "status", "ok"},
 		{3, "reasons", ""},
-		{4, "channel", "0"},
+		{4, "channel", ""}, // a probe stand has no channel (issue 10 item 15)
 		{4, "status", "blocked"},
 		{4, "velocity_clearance_m", strconv.FormatFloat(math.Round(p.Stations[4].Checks[0].Value*1e4)/1e4, 'f', 4, 64)},
 	} {
@@ -143,5 +144,24 @@ func TestCSVQuoting(t *testing.T) {
 	rows := readCSV(t, writeCSV(t, p))
 	if got, want := rows[3]["reasons"], `a "quoted", comma; two`+"\n"+`lines`; got != want {
 		t.Errorf("got %q, want %q", got, want)
+	}
+}
+
+// TestCSVImperial: a plan in feet and inches writes its lengths in decimal
+// feet under _ft columns, like its reasons (issue 10 item 15); far-2's
+// x = 1.5 m is 4.9213 ft (hand-computed, 1 ft = 0.3048 m exactly).
+func TestCSVImperial(t *testing.T) {
+	p := fixturePlan(t)
+	p.Request.Units = units.Imperial
+	recs, err := csv.NewReader(bytes.NewReader(writeCSV(t, p))).ReadAll()
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := strings.Join(export.CSVHeader(units.Imperial), ",")
+	if got := strings.Join(recs[0], ","); got != want || !strings.Contains(got, ",x_ft,") || strings.Contains(got, "_m,") {
+		t.Fatalf("header: got %s, want %s", got, want)
+	}
+	if got := recs[2][4]; got != "4.9213" {
+		t.Errorf("far-2 x_ft: got %q, want 4.9213", got)
 	}
 }
