@@ -18,15 +18,26 @@ import (
 )
 
 var (
-	asBuiltColumns  = []string{"id", "x", "y", "z", "base_x", "base_y"}
-	asBuiltRequired = []string{"id", "x", "y", "z"}
+	// asBuiltColumns are the measured columns; height is the microphone's
+	// height above the floor, the same as z (the station CSV writes both).
+	asBuiltColumns  = []string{"id", "x", "y", "z", "height", "base_x", "base_y"}
+	asBuiltRequired = []string{"id", "x", "y"}
+	// lengthSuffixes are the unit suffixes of the station CSV's length
+	// columns: x_m in metres, x_ft in feet.
+	lengthSuffixes = map[string]string{"_m": "m", "_ft": "ft"}
 	// exportOnly are the other columns of the station CSV that
-	// 'arcwright plan --csv' writes: an edited copy of it is read as an
-	// as-built file, its x_m … base_y_m columns in metres, the rest ignored.
-	exportOnly = []string{"channel", "array", "kind", "height_m", "radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg",
-		"polar_convention", "azimuth_deg", "stand", "aim", "status", "governing_point", "velocity_clearance_m", "velocity_point",
-		"hot_clearance_m", "hot_point", "wall_clearance_m", "oaspl_db", "reasons"}
+	// 'arcwright plan --csv' writes (without their unit suffix): an edited
+	// copy of it is read as an as-built file, its x_m … base_y_m (or x_ft …)
+	// columns in their unit, the rest ignored.
+	exportOnly = []string{"channel", "array", "kind", "radius", "nominal_radius", "polar_deg", "nominal_polar_deg",
+		"polar_convention", "azimuth_deg", "stand", "aim", "status", "governing_point", "velocity_clearance", "velocity_point",
+		"hot_clearance", "hot_point", "wall_clearance", "oaspl_db", "reasons"}
 )
+
+// heightTolerance is how far, m, the z and height of an as-built row may
+// differ and still count as one value: the rounding of the station CSV's
+// 4 decimals of a foot (0.03 mm), with room to spare.
+const heightTolerance = 1e-4
 
 // LoadAsBuilt reads the station positions measured after set-up from the
 // CSV file at path, for planner.Request.AsBuilt; see [DecodeAsBuilt] for
@@ -100,14 +111,14 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 		}
 		return nil
 	}
-	col, metres, ok := d.asBuiltHeader(header)
+	col, unit, ok := d.asBuiltHeader(header)
 	if !ok {
 		return nil
 	}
 	bare := d.lenUnit
 	length := func(n *yaml.Node, c string) (float64, bool) {
-		if d.lenUnit = bare; metres[c] {
-			d.lenUnit = "m"
+		if d.lenUnit = bare; unit[c] != "" {
+			d.lenUnit = unit[c]
 		}
 		defer func() { d.lenUnit = bare }()
 		return d.asBuiltLength(n, c)
@@ -153,16 +164,21 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 			continue
 		}
 		firstLine[id] = line
+		if unmeasured(at) {
+			continue // a row of the template left empty: not measured
+		}
 		var p planner.Placement
 		good := true
-		coords := []*float64{&p.Mic.X, &p.Mic.Y, &p.Mic.Z}
-		for i, c := range []string{"x", "y", "z"} {
+		coords := []*float64{&p.Mic.X, &p.Mic.Y}
+		for i, c := range []string{"x", "y"} {
 			v, ok := length(at(c), c)
-			if ok && c == "z" {
-				ok = d.heightRange(ci, v, line, "z", "the station")
-			}
 			*coords[i], good = v, good && ok
 		}
+		z, zc, ok := d.asBuiltHeight(at, length, line)
+		if ok {
+			ok = d.heightRange(ci, z, line, zc, "the station")
+		}
+		p.Mic.Z, good = z, good && ok
 		if bx, by := at("base_x"), at("base_y"); bx != nil && (bx.Value != "" || by.Value != "") {
 			x, okX := length(bx, "base_x")
 			y, okY := length(by, "base_y")
@@ -201,13 +217,56 @@ func separator(data []byte) rune {
 	return ','
 }
 
-// asBuiltHeader maps the column names of the header row to their index.
-func (d *decoder) asBuiltHeader(header []string) (col map[string]int, metres map[string]bool, ok bool) {
-	col, metres, ok = map[string]int{}, map[string]bool{}, true
+// unmeasured reports whether a row gives no measured value at all (every
+// measured column empty or absent): a row of the as-built template that
+// was not filled in.
+func unmeasured(at func(c string) *yaml.Node) bool {
+	for _, c := range asBuiltColumns[1:] {
+		if n := at(c); n != nil && n.Value != "" {
+			return false
+		}
+	}
+	return true
+}
+
+// asBuiltHeight reads a row's microphone height from its z or height
+// column, whichever is given; when both are, they must agree (the station
+// CSV writes the same number in both, so an edit of one alone would
+// otherwise be lost). It returns the height, m, and the column read.
+func (d *decoder) asBuiltHeight(at func(c string) *yaml.Node, length func(*yaml.Node, string) (float64, bool), line int) (float64, string, bool) {
+	zn, hn := at("z"), at("height")
+	switch {
+	case hn == nil || hn.Value == "":
+		v, ok := length(zn, "z")
+		return v, "z", ok
+	case zn == nil || zn.Value == "":
+		v, ok := length(hn, "height")
+		return v, "height", ok
+	}
+	z, okZ := length(zn, "z")
+	h, okH := length(hn, "height")
+	if !okZ || !okH {
+		return z, "z", false
+	}
+	if math.Abs(z-h) > heightTolerance {
+		d.errorf(ErrInvalid, line, "height", "%s, but z is %s: both are the microphone's height above the floor; change both, or leave one empty",
+			d.fmtLen(h), d.fmtLen(z))
+		return z, "z", false
+	}
+	return z, "z", true
+}
+
+// asBuiltHeader maps the column names of the header row to their index,
+// and the length columns with a unit suffix (x_m, x_ft) to their unit.
+func (d *decoder) asBuiltHeader(header []string) (col map[string]int, unit map[string]string, ok bool) {
+	col, unit, ok = map[string]int{}, map[string]string{}, true
 	for i, h := range header {
 		h = strings.ToLower(strings.TrimSpace(h))
-		if base, cut := strings.CutSuffix(h, "_m"); cut && contains(asBuiltColumns, base) {
-			h, metres[base] = base, true
+		u := ""
+		for suffix, name := range lengthSuffixes {
+			if base, cut := strings.CutSuffix(h, suffix); cut && (contains(asBuiltColumns, base) || contains(exportOnly, base)) {
+				h, u = base, name
+			}
 		}
 		switch {
 		case contains(exportOnly, h):
@@ -220,6 +279,9 @@ func (d *decoder) asBuiltHeader(header []string) (col map[string]int, metres map
 			ok = false
 		default:
 			col[h] = i
+			if u != "" {
+				unit[h] = u
+			}
 		}
 	}
 	for _, c := range asBuiltRequired {
@@ -228,11 +290,15 @@ func (d *decoder) asBuiltHeader(header []string) (col map[string]int, metres map
 			ok = false
 		}
 	}
+	if !has(col, "z") && !has(col, "height") {
+		d.errorf(ErrMissing, 1, "z", "missing column; want id, x, y, z and optionally base_x, base_y")
+		ok = false
+	}
 	if has(col, "base_x") != has(col, "base_y") {
 		d.errorf(ErrMissing, 1, "base_y", "give both base_x and base_y, or neither")
 		ok = false
 	}
-	return col, metres, ok
+	return col, unit, ok
 }
 
 // has reports whether the header has column c.

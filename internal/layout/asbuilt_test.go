@@ -68,7 +68,7 @@ func TestDecodeAsBuiltErrors(t *testing.T) {
 		{"empty", "", "built.csv: the file holds no header row; want id, x, y, z and optionally base_x, base_y"},
 		{"header only", "id,x,y,z\n", "built.csv: the file holds no positions; want one row per station after the header"},
 		{"unknown and missing columns", "id,x,y,hieght\nA-01,1,2,3\n",
-			"built.csv:1: hieght: unknown column \"hieght\"; the keys of an as-built file are id, x, y, z, base_x, base_y\n" +
+			"built.csv:1: hieght: unknown column \"hieght\"; did you mean \"height\"?\n" +
 				"built.csv:1: z: missing column; want id, x, y, z and optionally base_x, base_y"},
 		{"one base column", "id,x,y,z,base_x\nA-01,1,2,3,4\n", "built.csv:1: base_y: give both base_x and base_y, or neither"},
 		{"bad rows", "id,x,y,z\nA-01,1,2,-1\nA-01,1,2,1\n,1,2,1\nB-01,1 kg,2,9\nC-01,1,2\nD-01,1,2,3,4\n",
