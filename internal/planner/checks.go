@@ -75,7 +75,7 @@ type tally struct {
 var checkNames = [...]string{
 	CheckVelocity, CheckHot, CheckWall, CheckObstacle, CheckKeepOut, CheckHeight, CheckSpacing,
 	CheckSight, CheckFarField, CheckWavelength, CheckFresnel, CheckSourceErr, CheckGround,
-	CheckAbsorption, CheckInflow, CheckBuoyancy, CheckLevel,
+	CheckAbsorption, CheckInflow, CheckBuoyancy, CheckLevel, CheckAsBuilt,
 }
 
 var checkIndex = func() map[string]int {
@@ -390,6 +390,9 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 
 	// 3. spacing from other stands
 	t.add(ck.spacing(st, i))
+	if c, ok := ck.asBuilt(st); ok {
+		t.add(c)
+	}
 
 	isMic := st.Kind != Probes
 	// 4. sight line from the source region
@@ -718,7 +721,7 @@ func (ck *checker) finish(st *Station, t *tally) {
 		if !ok {
 			continue
 		}
-		if math.IsNaN(c.Value) && name != CheckGround {
+		if math.IsNaN(c.Value) && name != CheckGround && name != CheckAsBuilt {
 			c.Verdict = Blocked
 			c.Reason = "could not be evaluated: " + c.Reason
 		}

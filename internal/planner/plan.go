@@ -55,6 +55,20 @@ const (
 	CheckInflow     = "inflow_m_s"         // entrained inflow speed at the microphone, m/s
 	CheckBuoyancy   = "buoyant_plume"      // 1 when above a rising plume within its reach
 	CheckHeight     = "height_clearance"   // microphone height above the floor and below the ceiling, m
+	CheckAsBuilt    = "as_built_offset"    // how far the measured microphone is from its planned place, m (as-built checks only)
+)
+
+// Measurement says where the position a station was checked at comes from.
+type Measurement int
+
+const (
+	// NoAsBuilt: no as-built positions were given; the planned position.
+	NoAsBuilt Measurement = iota
+	// Measured: the as-built positions give this station's.
+	Measured
+	// NotMeasured: as-built positions were given, but not this station's;
+	// its planned position was checked.
+	NotMeasured
 )
 
 // Check is one condition at one station: a number, a verdict and a reason
@@ -81,6 +95,16 @@ type Station struct {
 	// Planned is where the plan puts the microphone when Mic is an
 	// as-built position (Request.AsBuilt); nil otherwise.
 	Planned *r3.Vec
+	// Measurement says whether Mic and Base are measured (as built), and
+	// whether as-built positions were given at all.
+	Measurement Measurement
+	// PlannedBase is where the plan puts the stand pole when the station is
+	// Measured; nil otherwise.
+	PlannedBase *orb.Point
+	// BaseMeasured is true when the as-built positions give the stand
+	// pole too; otherwise a measured station's Base is derived from its
+	// measured microphone.
+	BaseMeasured bool
 	// Base is the plan position of the stand pole, m (equal to the
 	// microphone's plan position when the stand has no boom).
 	Base orb.Point

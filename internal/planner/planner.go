@@ -243,17 +243,23 @@ func (ck *checker) station(pa *placedArray, k int, s spot, width int) Station {
 	if pa.stand != nil {
 		boom = pa.stand.BoomLength
 	}
-	if ab, ok := req.AsBuilt[st.ID]; ok {
+	plannedBase := standBase(s.mic, pa.centre, boom, req.Exit, a)
+	ab, measured := req.AsBuilt[st.ID]
+	switch {
+	case measured:
 		planned := s.mic
-		st.Planned = &planned
+		st.Planned, st.PlannedBase = &planned, &plannedBase
+		st.Measurement = Measured
 		s.mic, st.Mic = ab.Mic, ab.Mic
 		if pa.stand == nil {
 			s.mic.Z, st.Mic.Z = 0, 0
 		}
+	case req.AsBuilt != nil:
+		st.Measurement = NotMeasured
 	}
 	st.Base = standBase(s.mic, pa.centre, boom, req.Exit, a)
-	if ab, ok := req.AsBuilt[st.ID]; ok && ab.Base != nil {
-		st.Base = *ab.Base
+	if measured && ab.Base != nil {
+		st.Base, st.BaseMeasured = *ab.Base, true
 	}
 	st.Height = s.mic.Z
 	rel := req.Exit.ToJet(s.mic)
