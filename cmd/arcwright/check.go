@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 
 	"github.com/spf13/cobra"
 	"gonum.org/v1/gonum/spatial/r3"
@@ -23,8 +24,16 @@ after set-up replace the planned ones: a CSV file with a header row naming
 the columns id, x, y, z (microphone, from the datum) and optionally base_x,
 base_y (stand pole) — the station CSV that 'arcwright plan --csv' writes can
 be edited into one; values take units, and a bare number is in the layout's
-length unit. Each as-built station shows how far it is from its planned
-place. --format json prints the plan with the as-built positions.
+length unit. 'arcwright plan --as-built-template FILE' writes the form to
+fill in: the station IDs and only the measured columns. A station the file
+leaves out, or whose row is left empty, is listed as not measured (a
+warning: only its planned place was checked). The microphone and the stand
+base are checked separately: each as-built station shows how far its
+microphone and its base are from their planned places, and a microphone
+moved without its base (no base measured, or a base whose arm to the
+microphone is not the stand's) is flagged. A height_m column, as the station
+CSV has, is read like z; the two must agree. --format json prints the plan
+with the as-built positions.
 
 A station is reported ok only if every check passed for every operating
 point; a station that could not be evaluated is never ok.
@@ -64,6 +73,7 @@ func checkText(w io.Writer, p *planner.Plan) {
 	tw := newTable(w, 0)
 	fmt.Fprintln(tw, "station\tstatus\tpoint\tposition\tfirst reason\t")
 	sys := p.Request.System()
+	unmeasured := 0
 	for _, s := range p.Stations {
 		reason := ""
 		if len(s.Reasons) > 0 {
@@ -73,11 +83,26 @@ func checkText(w io.Writer, p *planner.Plan) {
 			}
 		}
 		pos := "as planned"
-		if s.Planned != nil {
-			pos = "as built, " + units.FormatLengthApprox(r3.Norm(r3.Sub(s.Mic, *s.Planned)), sys) + " from plan"
+		switch s.Measurement {
+		case planner.NotMeasured:
+			pos = "not measured"
+			unmeasured++
+		case planner.Measured:
+			pos = "as built, mic " + units.FormatLengthApprox(r3.Norm(r3.Sub(s.Mic, *s.Planned)), sys)
+			if s.Stand != nil && s.BaseMeasured {
+				pos += ", base " + units.FormatLengthApprox(math.Hypot(s.Base[0]-s.PlannedBase[0], s.Base[1]-s.PlannedBase[1]), sys)
+			} else if s.Stand != nil {
+				pos += ", base not measured"
+			}
+			pos += " from plan"
 		}
 		fmt.Fprintf(tw, "%s\t%s\t%s\t%s\t%s\t\n", s.ID, s.Status, s.Governing, pos, reason)
 	}
 	tw.Flush()
 	fmt.Fprintf(w, "%d stations: %d ok, %d warn, %d blocked\n", len(p.Stations), p.OK, p.Warn, p.Blocked)
+	if unmeasured > 0 {
+		fmt.Fprintf(w, "%d %s not measured: the as-built file leaves %s out or empty, so %s checked at %s planned %s only\n",
+			unmeasured, plural(unmeasured, "station", "stations"), plural(unmeasured, "it", "them"),
+			plural(unmeasured, "it was", "they were"), plural(unmeasured, "its", "their"), plural(unmeasured, "place", "places"))
+	}
 }

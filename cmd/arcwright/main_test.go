@@ -330,7 +330,7 @@ func TestCheck(t *testing.T) {
 		t.Fatalf("plan --csv: %s", errOut)
 	}
 	out, errOut, code = arc(t, "check", layoutPath, "--as-built", exported)
-	if code != exitOK || !strings.Contains(out, "as built, 0") {
+	if code != exitOK || !strings.Contains(out, "as built, mic 0") {
 		t.Errorf("exported CSV as as-built: exit %d\n%s%s", code, out, errOut)
 	}
 	os.WriteFile(csvPath, []byte("id,x,y,z\nZ-99,5 m,3 m,1 m\n"), 0o644)

@@ -22,6 +22,7 @@ import (
 type PlanOptions struct {
 	Layout                      string
 	JSON, CSV, GeoJSON, PDF     string
+	AsBuiltTemplate             string
 	Format, Paper, Scale, Units string
 }
 
@@ -31,6 +32,7 @@ func (o *PlanOptions) AddFlags(fs *pflag.FlagSet) {
 	fs.StringVar(&o.CSV, "csv", "", "write the station table (CSV) to this file")
 	fs.StringVar(&o.JSON, "json", "", "write the whole plan (JSON) to this file")
 	fs.StringVar(&o.GeoJSON, "geojson", "", "write stations, arcs, zones and obstacles (GeoJSON, cell frame in metres) to this file")
+	fs.StringVar(&o.AsBuiltTemplate, "as-built-template", "", "write the form for the positions measured after set-up (CSV: station IDs and the measured columns, empty) to this file")
 	formatFlag(fs, &o.Format, "text", "json")
 	fs.StringVar(&o.Paper, "paper", "", "sheet paper: A4 to A0, Letter, Tabloid, ANSI C to E or Arch A to E1 (default: the layout's, else A3)")
 	fs.StringVar(&o.Scale, "scale", "", `plan scale: 1:50, or 1" = 20' on a feet-and-inches sheet (default: the layout's, else the largest standard scale that fits)`)
@@ -57,7 +59,10 @@ stations, zones and nozzle. The sheet's date is the layout's title date;
 without one the sheet says "not dated" and the PDF carries the fixed date
 2000-01-01, so the same layout always gives the same bytes.
 
---csv, --json and --geojson write the exports. Every destination is checked
+--csv, --json and --geojson write the exports; --as-built-template writes the
+form for 'arcwright check --as-built': the station IDs under the measured
+columns id, x, y, z, base_x, base_y, left empty to be filled in after set-up
+(bare numbers in the layout's length unit). Every destination is checked
 before planning: none may be the layout or another output, a directory or a
 device. The files are written all or none: each goes to a temporary file
 first, and they replace their targets only when every one was written (an
@@ -172,6 +177,7 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	add("--csv", o.CSV, func(b io.Writer) error { return export.CSV(b, p) })
 	add("--json", o.JSON, func(b io.Writer) error { return export.JSON(b, p) })
 	add("--geojson", o.GeoJSON, func(b io.Writer) error { return export.GeoJSON(b, p) })
+	add("--as-built-template", o.AsBuiltTemplate, func(b io.Writer) error { return export.AsBuiltTemplate(b, p) })
 	if toStdout && o.Format == "json" {
 		return usageError{errors.New("--format json prints the plan on standard output, and so does an output given as -: choose one")}
 	}
