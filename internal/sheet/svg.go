@@ -429,7 +429,13 @@ func verdictName(v planner.Verdict) string {
 // is its name. Each station is a group of class "station" with data-id and
 // data-verdict, coloured and shaped by its verdict. The output depends only
 // on the drawing.
+//
+// It returns an error wrapping [ErrRender] when a coordinate of the
+// drawing is NaN or infinite, or when w fails.
 func (d *PlanDrawing) WriteSVG(w io.Writer) error {
+	if err := d.checkFinite(); err != nil {
+		return err
+	}
 	s := &svgWriter{w: bufio.NewWriter(w)}
 	a := d.Area
 	s.printf(`<svg xmlns="http://www.w3.org/2000/svg" class="arcwright-plan" viewBox="%s %s %s %s" width="%smm" height="%smm" font-family="Helvetica, Arial, sans-serif">`+"\n",
@@ -511,6 +517,71 @@ func (d *PlanDrawing) WriteSVG(w io.Writer) error {
 	}
 	if err := s.w.Flush(); err != nil {
 		return fmt.Errorf("%w: %w", ErrRender, err)
+	}
+	return nil
+}
+
+// checkFinite returns an error wrapping [ErrRender] naming the first item
+// of the drawing with a NaN or infinite coordinate.
+func (d *PlanDrawing) checkFinite() error {
+	bad := func(what string) error {
+		return fmt.Errorf("%w: %s has a coordinate that is not a finite number", ErrRender, what)
+	}
+	shapes := func(what string, ss []Shape) error {
+		for _, sh := range ss {
+			if !finite(sh.R) {
+				return bad(what)
+			}
+			for _, ring := range append([][]Pt{sh.Points, sh.Clip}, sh.Holes...) {
+				for _, p := range ring {
+					if !finite(p.X, p.Y) {
+						return bad(what + " (" + string(sh.Style) + ")")
+					}
+				}
+			}
+		}
+		return nil
+	}
+	a := d.Area
+	if !finite(a.X, a.Y, a.W, a.H) {
+		return bad("the drawing's area")
+	}
+	if err := shapes("the plan view", d.View.Shapes); err != nil {
+		return err
+	}
+	if err := shapes("the zones", d.SheetZones); err != nil {
+		return err
+	}
+	for _, pz := range d.Points {
+		if err := shapes("the zones of "+pz.Name, pz.Shapes); err != nil {
+			return err
+		}
+	}
+	for _, st := range d.Stations {
+		if !finite(st.At.X, st.At.Y, st.R) {
+			return bad("station " + st.ID)
+		}
+		if err := shapes("station "+st.ID, st.Shapes); err != nil {
+			return err
+		}
+	}
+	if err := shapes("the scale bar", d.Shapes); err != nil {
+		return err
+	}
+	for _, t := range d.Texts {
+		if !finite(t.X, t.Y, t.Size) {
+			return bad("the text " + strconv.Quote(t.Text))
+		}
+	}
+	for _, l := range d.Labels {
+		if !finite(l.X, l.Y, l.W, l.H, l.Size) {
+			return bad("the label " + strconv.Quote(l.Text))
+		}
+		for _, p := range l.Line {
+			if !finite(p.X, p.Y) {
+				return bad("the leader of " + strconv.Quote(l.Text))
+			}
+		}
 	}
 	return nil
 }

@@ -6,6 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"math"
 	"strings"
 	"testing"
 
@@ -242,6 +243,38 @@ func TestWriteSVG(t *testing.T) {
 	}
 }
 
+// Each station's symbol is drawn in its verdict's colour (our own palette,
+// SUGGESTION) as well as in its verdict's shape.
+func TestWriteSVGVerdictColours(t *testing.T) {
+	want := map[string]string{"ok": "#147d3c", "warn": "#be7300", "blocked": "#c31e28"}
+	els := parseSVG(t, svgOf(t, planView(t, chamberPlan(t))))
+	seen := map[string]bool{}
+	verdict, depth := "", -1
+	for _, e := range els {
+		if depth >= 0 && e.Depth <= depth {
+			verdict, depth = "", -1
+		}
+		if e.Name == "g" && strings.HasPrefix(e.Attr["class"], "station ") {
+			verdict, depth = e.Attr["data-verdict"], e.Depth
+			continue
+		}
+		if verdict == "" || e.Attr["class"] == "hit" {
+			continue
+		}
+		if c := e.Attr["stroke"]; c != "" && c != "none" {
+			if c != want[verdict] {
+				t.Errorf("a %s station is stroked %s, want %s", verdict, c, want[verdict])
+			}
+			seen[verdict] = true
+		}
+	}
+	for v := range want {
+		if !seen[v] {
+			t.Errorf("no %s station drawn", v)
+		}
+	}
+}
+
 // A station ID with characters special to XML stays well-formed.
 func TestWriteSVGEscapes(t *testing.T) {
 	p := chamberPlan(t)
@@ -263,6 +296,20 @@ func TestPlanViewErrors(t *testing.T) {
 	p := chamberPlan(t)
 	if _, err := sheet.PlanView(p, sheet.Options{Paper: "B7"}); !errors.Is(err, sheet.ErrUnknownPaper) {
 		t.Errorf("got %v, want ErrUnknownPaper", err)
+	}
+}
+
+// A drawing with a NaN coordinate is an error, not an SVG with "NaN" in it.
+func TestWriteSVGNotFinite(t *testing.T) {
+	d := planView(t, chamberPlan(t))
+	d.Stations[3].Shapes[0].Points[0].X = math.NaN()
+	var b bytes.Buffer
+	err := d.WriteSVG(&b)
+	if !errors.Is(err, sheet.ErrRender) || !strings.Contains(err.Error(), d.Stations[3].ID) {
+		t.Errorf("got %v, want an ErrRender naming station %s", err, d.Stations[3].ID)
+	}
+	if b.Len() != 0 {
+		t.Errorf("wrote %d bytes before failing, want none", b.Len())
 	}
 }
 
