@@ -2,6 +2,7 @@ package preview_test
 
 import (
 	"context"
+	"encoding/json"
 	"fmt"
 	"os"
 	"os/exec"
@@ -110,12 +111,12 @@ func TestBrowser(t *testing.T) {
 	if err := chromedp.Do(ctx, chromedp.Evaluate[chromedp.Void](`window.__sameLoad = 42`)); err != nil {
 		t.Fatal(err)
 	}
-	// every station of the plan has a symbol: 13 on the arc, 5 on the
-	// sideline, 7 on the near-field line and the probe (the demo's arrays)
-	if n0 != 26 {
-		t.Fatalf("got %d station symbols, want 26", n0)
+	// every station of the plan has a symbol
+	want0 := stationCount(t, hs.URL)
+	if n0 != want0 || n0 == 0 {
+		t.Fatalf("got %d station symbols, want the plan's %d", n0, want0)
 	}
-	waitFor(t, ctx, "the station table", `document.querySelectorAll("#stations tbody tr").length === 26`, 5*time.Second)
+	waitFor(t, ctx, "the station table", fmt.Sprintf(`document.querySelectorAll("#stations tbody tr").length === %d`, n0), 5*time.Second)
 	// pointing at a station shows its checks and reasons
 	if err := chromedp.Do(ctx, chromedp.Evaluate[chromedp.Void](`document.querySelector('#svg-holder g.station[data-id="A-01"]').dispatchEvent(new MouseEvent("mouseenter"))`)); err != nil {
 		t.Fatal(err)
@@ -123,7 +124,11 @@ func TestBrowser(t *testing.T) {
 	waitFor(t, ctx, "the station's checks", `(() => { const d = document.getElementById("detail"); return d.textContent.includes("A-01") && d.querySelectorAll("table.checks tr").length >= 10 && d.textContent.includes("velocity clearance") })()`, 5*time.Second)
 
 	writeFile(t, path, fewerArcStations(t, text))
-	waitFor(t, ctx, "the drawing after the edit", count+` === 20`, 5*time.Second)
+	waitFor(t, ctx, "the drawing after the edit", count+fmt.Sprintf(` !== %d`, n0), 5*time.Second)
+	n1 := evalInt(t, ctx, count)
+	if want1 := stationCount(t, hs.URL); n1 != want1 || n1 >= n0 {
+		t.Fatalf("after the edit: got %d station symbols, want the new plan's %d, fewer than %d", n1, want1, n0)
+	}
 	same, err := chromedp.Run(ctx, chromedp.Evaluate[bool](`window.__sameLoad === 42`))
 	if err != nil {
 		t.Fatal(err)
@@ -138,13 +143,13 @@ func TestBrowser(t *testing.T) {
 	writeFile(t, path, bad)
 	waitFor(t, ctx, "the problems", fmt.Sprintf(`!document.getElementById("problems").hidden && document.getElementById("problem-list").textContent.includes("cell.yaml:%d") && document.getElementById("problem-list").textContent.includes("nozzle.diameter")`, line), 5*time.Second)
 	waitFor(t, ctx, "the stale mark", `document.getElementById("drawing").dataset.stale === "true" && getComputedStyle(document.getElementById("stale-banner")).display !== "none"`, 5*time.Second)
-	if n := evalInt(t, ctx, count); n != 20 {
-		t.Errorf("while stale: got %d station symbols, want the last good 20", n)
+	if n := evalInt(t, ctx, count); n != n1 {
+		t.Errorf("while stale: got %d station symbols, want the last good %d", n, n1)
 	}
 	shot(t, ctx, "serve-stale.png")
 
 	writeFile(t, path, text)
-	waitFor(t, ctx, "the plan back", `document.getElementById("problems").hidden && document.getElementById("drawing").dataset.stale === "false" && `+count+` === 26`, 5*time.Second)
+	waitFor(t, ctx, "the plan back", fmt.Sprintf(`document.getElementById("problems").hidden && document.getElementById("drawing").dataset.stale === "false" && %s === %d`, count, n0), 5*time.Second)
 	shot(t, ctx, "serve.png")
 }
 
@@ -170,4 +175,20 @@ func evalInt(t *testing.T, ctx context.Context, js string) int {
 		t.Fatalf("%s: %v", js, err)
 	}
 	return n
+}
+
+// stationCount returns the number of stations in the served /plan.json.
+func stationCount(t *testing.T, url string) int {
+	t.Helper()
+	res, body := get(t, url+"/plan.json")
+	if res.StatusCode != 200 {
+		t.Fatalf("/plan.json: got %d", res.StatusCode)
+	}
+	var doc struct {
+		Stations []json.RawMessage `json:"stations"`
+	}
+	if err := json.Unmarshal(body, &doc); err != nil {
+		t.Fatal(err)
+	}
+	return len(doc.Stations)
 }
