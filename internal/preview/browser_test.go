@@ -123,6 +123,22 @@ func TestBrowser(t *testing.T) {
 	}
 	waitFor(t, ctx, "the station's checks", `(() => { const d = document.getElementById("detail"); return d.textContent.includes("A-01") && d.querySelectorAll("table.checks tr").length >= 10 && d.textContent.includes("velocity clearance") })()`, 5*time.Second)
 
+	// zoom in and back
+	const width = `document.querySelector("#svg-holder svg").viewBox.baseVal.width`
+	w0 := evalFloat(t, ctx, width)
+	if err := chromedp.Do(ctx, chromedp.Evaluate[chromedp.Void](`document.getElementById("zoom-in").click()`)); err != nil {
+		t.Fatal(err)
+	}
+	if w := evalFloat(t, ctx, width); !(w < 0.8*w0) {
+		t.Errorf("zoom in: viewBox width %g, want below %g", w, 0.8*w0)
+	}
+	if err := chromedp.Do(ctx, chromedp.Evaluate[chromedp.Void](`document.getElementById("zoom-fit").click()`)); err != nil {
+		t.Fatal(err)
+	}
+	if w := evalFloat(t, ctx, width); w != w0 {
+		t.Errorf("fit: viewBox width %g, want %g", w, w0)
+	}
+
 	writeFile(t, path, fewerArcStations(t, text))
 	waitFor(t, ctx, "the drawing after the edit", count+fmt.Sprintf(` !== %d`, n0), 5*time.Second)
 	n1 := evalInt(t, ctx, count)
@@ -191,4 +207,14 @@ func stationCount(t *testing.T, url string) int {
 		t.Fatal(err)
 	}
 	return len(doc.Stations)
+}
+
+// evalFloat evaluates the JavaScript expression js to a number.
+func evalFloat(t *testing.T, ctx context.Context, js string) float64 {
+	t.Helper()
+	v, err := chromedp.Run(ctx, chromedp.Evaluate[float64](js))
+	if err != nil {
+		t.Fatalf("%s: %v", js, err)
+	}
+	return v
 }

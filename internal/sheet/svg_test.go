@@ -233,10 +233,33 @@ func TestWriteSVG(t *testing.T) {
 		t.Errorf("got %d labels in the SVG, the drawing has %d", labels, len(d.Labels))
 	}
 	// the scale bar and its caption come along
-	for _, want := range []string{"PLAN", "Scale bar", "aw-hatch-zone-velocity-0", "aw-hatch-keepout-0"} {
+	for _, want := range []string{"PLAN", "Scale bar"} {
 		if !bytes.Contains(doc, []byte(want)) {
 			t.Errorf("SVG lacks %q", want)
 		}
+	}
+	// hatching is drawn with patterns, and every reference resolves
+	ids := map[string]bool{}
+	for _, e := range els {
+		if e.Attr["id"] != "" {
+			ids[e.Attr["id"]] = true
+		}
+	}
+	refs := 0
+	for _, e := range els {
+		for _, a := range []string{"fill", "clip-path"} {
+			v := e.Attr[a]
+			if !strings.HasPrefix(v, "url(#") {
+				continue
+			}
+			refs++
+			if id := strings.TrimSuffix(strings.TrimPrefix(v, "url(#"), ")"); !ids[id] {
+				t.Errorf("%s refers to #%s, which is not defined", a, id)
+			}
+		}
+	}
+	if refs == 0 {
+		t.Error("no hatching or clipping: the zones and keep-outs are hatched on the sheet")
 	}
 	if !bytes.Equal(doc, svgOf(t, planView(t, p))) {
 		t.Error("two drawings of the same plan differ")

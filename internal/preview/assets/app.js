@@ -108,6 +108,11 @@
     if (!root) return;
     root.removeAttribute("width");
     root.removeAttribute("height");
+    const vb = (root.getAttribute("viewBox") || "").split(/\s+/).map(Number);
+    const same = full && vb.length === 4 && vb.every((x, i) => Math.abs(x - full[i]) < 0.01);
+    full = vb.length === 4 && vb.every(isFinite) ? vb : null;
+    if (!same) view = null; // a new extent: show the whole plan again
+    applyView();
     // zone selector: the sheet's zones and each point's
     const sel = $("zone-select");
     const groups = root.querySelectorAll("g.zones");
@@ -132,6 +137,63 @@
       g.addEventListener("click", show);
     }
     markPicked();
+  }
+
+  // zoom and pan: the drawing's viewBox; null shows the whole plan
+  let view = null;
+  let full = null;        // the drawing's own viewBox
+  function svgRoot() { return document.querySelector("#svg-holder svg"); }
+  function applyView() {
+    const root = svgRoot();
+    if (!root || !full) return;
+    const v = view || full;
+    root.setAttribute("viewBox", v.map((x) => x.toFixed(2)).join(" "));
+    root.classList.toggle("zoomed", view !== null);
+  }
+  function zoom(f, cx, cy) {
+    if (!full) return;
+    const [x, y, w, h] = view || full;
+    if (cx === undefined) { cx = x + w / 2; cy = y + h / 2; }
+    const nw = w * f;
+    if (nw >= full[2]) { view = null; applyView(); return; }
+    if (nw < full[2] / 40) return;
+    view = [cx - (cx - x) * f, cy - (cy - y) * f, nw, h * f];
+    applyView();
+  }
+  function toUser(root, ev) {
+    const m = root.getScreenCTM();
+    if (!m) return null;
+    const p = new DOMPoint(ev.clientX, ev.clientY).matrixTransform(m.inverse());
+    return [p.x, p.y];
+  }
+  function wireZoom() {
+    const holder = $("svg-holder");
+    holder.addEventListener("wheel", (ev) => {
+      const root = svgRoot();
+      if (!root || !(ev.ctrlKey || ev.metaKey)) return;
+      ev.preventDefault();
+      const p = toUser(root, ev);
+      if (p) zoom(ev.deltaY > 0 ? 1.25 : 0.8, p[0], p[1]);
+    }, { passive: false });
+    let drag = null;
+    holder.addEventListener("pointerdown", (ev) => {
+      const root = svgRoot();
+      if (!root || !view || ev.target.closest("g.station")) return;
+      drag = { x: ev.clientX, y: ev.clientY, v: view.slice(), k: view[2] / root.getBoundingClientRect().width };
+      root.classList.add("panning");
+      holder.setPointerCapture(ev.pointerId);
+    });
+    holder.addEventListener("pointermove", (ev) => {
+      if (!drag) return;
+      view = [drag.v[0] - (ev.clientX - drag.x) * drag.k, drag.v[1] - (ev.clientY - drag.y) * drag.k, drag.v[2], drag.v[3]];
+      applyView();
+    });
+    const end = () => { drag = null; const r = svgRoot(); if (r) r.classList.remove("panning"); };
+    holder.addEventListener("pointerup", end);
+    holder.addEventListener("pointercancel", end);
+    $("zoom-in").addEventListener("click", () => zoom(0.67));
+    $("zoom-out").addEventListener("click", () => zoom(1.5));
+    $("zoom-fit").addEventListener("click", () => { view = null; applyView(); });
   }
 
   function applyZones(root) {
@@ -244,6 +306,7 @@
   }
 
   function start() {
+    wireZoom();
     $("zone-select").addEventListener("change", (e) => {
       zonePick = e.target.value;
       applyZones();
