@@ -29,6 +29,8 @@ const (
 	layerArc       = "arc"
 	layerStation   = "station"
 	layerStandBase = "stand_base"
+	layerNoise     = "noise_contour"
+	layerCrew      = "crew"
 )
 
 // GeoJSON writes p to w as a GeoJSON FeatureCollection, compact, followed
@@ -51,6 +53,12 @@ const (
 //	arc         LineString through the stations of each arc array, following the arc
 //	station     Point at the microphone: id, channel, array, status, z_m, polar_deg
 //	stand_base  Point at the stand pole, where it differs from the microphone's plan position
+//	crew        Point at a crew position: name, z_m, hours, and its loudest a_weighted_db,
+//	            peak_db, point and status
+//	noise_contour MultiLineString: the predicted 85 dB(A), layout's dB(A) and 140 dB(C) peak
+//	            contours at ear height for the loudest point (see planner.Plan.NoiseMap):
+//	            level_db, weighting ("A" or "C peak"), point, height_m, everywhere (true
+//	            when the whole mapped area is above the level; then without lines)
 //
 // Property values that are NaN or ±Inf are null. The output is
 // deterministic.
@@ -119,6 +127,14 @@ func newCollection(p *planner.Plan) (*geojson.FeatureCollection, error) {
 	c.addJet(p)
 	c.addArcs(p)
 	c.addStations(p)
+	c.addCrew(p)
+	if len(p.Points) > 0 {
+		m, err := p.NoiseMap()
+		if err != nil {
+			return nil, fmt.Errorf("export: noise contours: %w", err)
+		}
+		c.addNoise(m)
+	}
 	return c.fc, c.err
 }
 

@@ -52,6 +52,8 @@ type builder struct {
 	cropped   bool    // the plan shows the region of interest, not the whole cell
 	// hazardsDrawn are the hazards marked on the plan
 	hazardsDrawn []hazard
+	noise        *planner.NoiseMap // the predicted noise contours; nil when noiseErr says why
+	noiseErr     error
 }
 
 // Build lays out the sheet set of plan p: pages, scale, every drawn item's
@@ -98,6 +100,7 @@ func Build(p *planner.Plan, opt Options) (*Model, error) {
 	m.Title = clean(req.Title.Title)
 
 	b.zs = b.zones()
+	b.noise, b.noiseErr = p.NoiseMap()
 	if err := b.planPage(asked, field); err != nil {
 		return nil, err
 	}
@@ -235,6 +238,14 @@ func (b *builder) continuation() {
 	f.table(b.arraysTable())
 	f.gap(3)
 	f.table(b.pointsTable())
+	if lt := b.levelTable(); len(lt.rows) > 0 {
+		f.gap(3)
+		f.table(lt)
+	}
+	if len(b.plan.Crew) > 0 {
+		f.gap(3)
+		f.table(b.crewTable())
+	}
 	for _, t := range b.absorptionTables() {
 		f.gap(3)
 		f.table(t)

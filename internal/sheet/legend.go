@@ -87,6 +87,24 @@ func (b *builder) legendEntries() []legendEntry {
 			return append(s, markShapes(planner.OK, Pt{r.X + 6.5, p.Y}, 0.9)...)
 		}, "stand base and boom")
 	}
+	if m := b.noise; m != nil {
+		drawn := map[bool]bool{} // by Peak: some contour has a line
+		for _, c := range m.Contours {
+			drawn[c.Peak] = drawn[c.Peak] || len(c.Lines) > 0
+		}
+		if drawn[false] {
+			add(func(r Rect) []Shape { a, z := mid(r); return []Shape{line(StyleNoiseA, a, z)} }, "predicted dB(A) contour, labelled (point "+m.Point+", at "+pr.length(m.Height)+")")
+		}
+		if drawn[true] {
+			add(func(r Rect) []Shape { a, z := mid(r); return []Shape{line(StyleNoisePeak, a, z)} }, "predicted 140 dB(C) peak contour")
+		}
+	}
+	if len(b.req.Crew) > 0 {
+		add(func(r Rect) []Shape {
+			p := Pt{r.X + 2, r.Y + r.H/2}
+			return []Shape{poly(StyleCrew, []Pt{{p.X - 1, p.Y - 1}, {p.X + 1, p.Y - 1}, {p.X + 1, p.Y + 1}, {p.X - 1, p.Y + 1}})}
+		}, "crew position, named")
+	}
 	add(func(r Rect) []Shape {
 		a, z := mid(r)
 		return []Shape{line(StyleGrid, a, z), line(StyleGrid, Pt{r.X + 4, r.Y}, Pt{r.X + 4, r.Bottom()})}

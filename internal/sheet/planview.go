@@ -103,6 +103,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.grid()
 	v.cell()
 	v.drawZones(z)
+	noise := v.noiseContours()
 	v.nozzle()
 	v.collector()
 	v.positions()
@@ -114,6 +115,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.reference()
 	v.hazardMarks()
 	v.placeLabels(z)
+	v.placeNoiseLabels(noise)
 
 	b.model.Pages = append(b.model.Pages, Page{})
 	pg := &b.model.Pages[0]

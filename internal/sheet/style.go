@@ -43,6 +43,9 @@ const (
 	StyleRule       Style = "rule"          // table lines
 	StyleHeadFill   Style = "headfill"      // table heading background
 	StyleScaleFill  Style = "scalefill"     // black segments of the scale bar
+	StyleNoiseA     Style = "noise.a"       // an A-weighted noise contour: brown long dashes
+	StyleNoisePeak  Style = "noise.peak"    // the C-weighted peak contour: heavy magenta dash-dot
+	StyleCrew       Style = "crew"          // a crew position: a yellow square
 )
 
 // RGB is a colour, each component 0–255.
@@ -85,11 +88,17 @@ var (
 	// safetyOrange approximates the safety orange of ANSI Z535.1, the
 	// colour of the WARNING signal word panel (FROM MEMORY)
 	safetyOrange = RGB{245, 120, 20}
+	noiseAmb     = RGB{140, 80, 20} // brown: apart from the safety orange of the hazards
+	crewYellow   = RGB{250, 215, 0}
+	noiseMag     = RGB{170, 0, 120}
 )
 
 func fill(c RGB) *RGB { return &c }
 
 var styles = map[Style]StyleDef{
+	StyleNoiseA:     {Pen: Pen{Width: 0.35, Dash: []float64{4, 1.2}, Color: noiseAmb}},
+	StyleNoisePeak:  {Pen: Pen{Width: 0.5, Dash: []float64{3, 0.8, 0.5, 0.8}, Color: noiseMag}},
+	StyleCrew:       {Pen: Pen{Width: 0.3, Color: black}, Fill: fill(crewYellow)},
 	StyleFrame:      {Pen: Pen{Width: 0.5, Color: black}},
 	StyleBox:        {Pen: Pen{Width: 0.25, Color: black}},
 	StyleCaution:    {Pen: Pen{Width: 0.8, Color: black}},
