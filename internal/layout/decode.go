@@ -16,7 +16,7 @@ import (
 const FormatVersion = 1
 
 var (
-	topKeys     = []string{"arcwright", "title", "units", "polar_angle", "ambient", "cell", "nozzle", "operating_points", "limits", "band", "stands", "arrays", "sheet", "noise", "crew"}
+	topKeys     = []string{"arcwright", "title", "units", "polar_angle", "ambient", "cell", "nozzle", "operating_points", "limits", "band", "stands", "arrays", "sheet", "noise", "crew", "anchor"}
 	titleKeys   = []string{"title", "facility", "test", "revision", "prepared_by", "checked_by", "approved_by", "date"}
 	unitsKeys   = []string{"length", "sheet"}
 	sheetKeys   = []string{"scale", "paper"}
@@ -91,6 +91,7 @@ func (d *decoder) request(root *yaml.Node) *planner.Request {
 	req.Sheet = d.sheetSection(top)
 	req.Noise = d.noiseSection(top, ci)
 	req.Crew = d.crewSection(top, ci)
+	req.Anchor = d.anchorSection(top)
 	d.collectorCheck(ci, ni)
 	if ci.cutoff > 0 && req.Band.Low > 0 && req.Band.Low < ci.cutoff {
 		d.warnf(top.keyLine("band"), "band.low", "the band starts at %s, below the treatment cut-off %s: the cell is not anechoic there",

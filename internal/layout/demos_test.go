@@ -97,7 +97,7 @@ func TestStarter(t *testing.T) {
 		for _, keys := range [][]string{
 			topKeys, titleKeys, unitsKeys, sheetKeys, ambientKeys, cellKeys, obstacleKeys, collectorKeys, markKeys,
 			circleKeys, nozzleKeys, opKeys, limitKeys, bandKeys, standKeys, arrayKeys, arcKeys, lineKeys, nearKeys,
-			ringKeys, pointKeys, rangeKeys, noiseKeys, crewKeys, microphoneKeys,
+			ringKeys, pointKeys, rangeKeys, noiseKeys, crewKeys, microphoneKeys, anchorKeys,
 		} {
 			for _, k := range keys {
 				// the key, followed by ':' and a comment on the same line (or on the next lines).

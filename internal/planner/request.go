@@ -281,6 +281,10 @@ type Request struct {
 	Noise Noise
 	// Crew are the places where people stay during runs.
 	Crew []Crew
+	// Anchor places the cell's datum on the Earth for the GeoJSON export;
+	// nil when the layout gives none (the export is then in the cell frame).
+	// The planner does not use it.
+	Anchor *geometry.Anchor
 	// AsBuilt replaces planned positions by measured ones, by station ID:
 	// the check command's as-built positions. Every key must name a
 	// station of the plan.
