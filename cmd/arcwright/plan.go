@@ -31,7 +31,7 @@ func (o *PlanOptions) AddFlags(fs *pflag.FlagSet) {
 	fs.StringVar(&o.PDF, "pdf", "", "write the floor layout sheet (PDF) to this file")
 	fs.StringVar(&o.CSV, "csv", "", "write the station table (CSV) to this file")
 	fs.StringVar(&o.JSON, "json", "", "write the whole plan (JSON) to this file")
-	fs.StringVar(&o.GeoJSON, "geojson", "", "write stations, arcs, zones and obstacles (GeoJSON, cell frame in metres) to this file")
+	fs.StringVar(&o.GeoJSON, "geojson", "", "write stations, arcs, zones and obstacles (GeoJSON: WGS 84 with the layout's anchor, else the cell frame in metres) to this file")
 	fs.StringVar(&o.AsBuiltTemplate, "as-built-template", "", "write the form for the positions measured after set-up (CSV: station IDs and the measured columns, empty) to this file")
 	formatFlag(fs, &o.Format, "text", "json")
 	fs.StringVar(&o.Paper, "paper", "", "sheet paper: A4 to A0, Letter, Tabloid, ANSI C to E or Arch A to E1 (default: the layout's, else A3)")

@@ -134,7 +134,7 @@ func ExampleGeoJSON() {
 		fmt.Println(f.Properties["layer"], f.Geometry.GeoJSONType(), f.Geometry)
 	}
 	// Output:
-	// cell datum, metres, X/Y in plan
+	// LOCAL, NOT WGS 84: metres from the layout's datum, X and Y in plan (the cell frame); give the layout an anchor for longitude and latitude
 	// nozzle Point [0 0]
 	// station Point [0 2]
 }

@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 	"io"
+	"math"
 
 	"github.com/paulmach/orb"
 	"github.com/paulmach/orb/geojson"
@@ -13,8 +14,13 @@ import (
 	"arcwright/internal/planner"
 )
 
-// coordinateFrame is the foreign member that says what the coordinates are.
-const coordinateFrame = "cell datum, metres, X/Y in plan"
+// The foreign member "coordinate_frame" says what the coordinates are.
+const (
+	// localFrame: the layout has no anchor.
+	localFrame = "LOCAL, NOT WGS 84: metres from the layout's datum, X and Y in plan (the cell frame); give the layout an anchor for longitude and latitude"
+	// geographicFrame: the layout has an anchor.
+	geographicFrame = "WGS 84 longitude and latitude (RFC 7946), from the cell frame by a local tangent plane at the layout's anchor"
+)
 
 // Layer names: the "layer" property of every feature.
 const (
@@ -34,11 +40,20 @@ const (
 )
 
 // GeoJSON writes p to w as a GeoJSON FeatureCollection, compact, followed
-// by a newline. Coordinates are the cell frame in metres (X and Y in plan
-// from the cell datum), rounded to 0.1 mm; they are not longitude and
-// latitude, which the foreign member "coordinate_frame" says, beside
-// "source", "title" and "polar_angle_convention". Features come in this
-// order, each with a "layer" property:
+// by a newline.
+//
+// When the layout has an anchor (Request.Anchor), the coordinates are RFC
+// 7946 WGS 84 longitudes and latitudes in degrees, rounded to 1e-9° (0.1 mm
+// of latitude): each plan point is carried from the cell frame by the local
+// tangent plane at the anchor ([geometry.Anchor.ToWGS84], exact to under
+// 0.01 mm within 1 km of the datum), and the top-level members say
+// "geographic": true and give the "anchor". Without an anchor the
+// coordinates are the cell frame in metres (X and Y in plan from the datum),
+// rounded to 0.1 mm: NOT longitude and latitude, which RFC 7946 would
+// assume; the members say "geographic": false and the "coordinate_frame"
+// says LOCAL, NOT WGS 84. Lengths in properties (_m) are metres either way.
+// The members "source", "title" and "polar_angle_convention" follow.
+// Features come in this order, each with a "layer" property:
 //
 //	boundary    Polygon: the cell boundary (bounded cells only)
 //	obstacle    Polygon (a disc as a 64-gon with its vertices on the circle): name, z_min_m, z_max_m
@@ -87,8 +102,9 @@ func GeoJSON(w io.Writer, p *planner.Plan) error {
 
 // collection gathers features and keeps the first error.
 type collection struct {
-	fc  *geojson.FeatureCollection
-	err error
+	fc     *geojson.FeatureCollection
+	err    error
+	anchor *geometry.Anchor // nil: coordinates in the cell frame
 }
 
 // add appends a feature of the given layer; what names it in an error.
@@ -116,12 +132,21 @@ func (c *collection) add(layer, what string, g orb.Geometry, ok bool, props geoj
 func newCollection(p *planner.Plan) (*geojson.FeatureCollection, error) {
 	r := p.Request
 	conv, _ := conventionName(r.Convention)
-	c := &collection{fc: geojson.NewFeatureCollection()}
+	c := &collection{fc: geojson.NewFeatureCollection(), anchor: r.Anchor}
 	c.fc.ExtraMembers = geojson.Properties{
-		"coordinate_frame":       coordinateFrame,
+		"coordinate_frame":       localFrame,
+		"geographic":             false,
 		"source":                 r.Source,
 		"title":                  r.Title.Title,
 		"polar_angle_convention": conv,
+	}
+	if a := r.Anchor; a != nil {
+		c.fc.ExtraMembers["coordinate_frame"] = geographicFrame
+		c.fc.ExtraMembers["geographic"] = true
+		c.fc.ExtraMembers["anchor"] = geojson.Properties{
+			"latitude_deg": sig(a.Latitude * 180 / math.Pi), "longitude_deg": sig(a.Longitude * 180 / math.Pi),
+			"bearing_of_x_deg": sig(a.BearingX * 180 / math.Pi),
+		}
 	}
 	c.addCell(&r.Cell)
 	c.addJet(p)
@@ -141,7 +166,7 @@ func newCollection(p *planner.Plan) (*geojson.FeatureCollection, error) {
 // addCell adds the boundary, obstacles, keep-out zones, collector and marks.
 func (c *collection) addCell(cell *geometry.Cell) {
 	if cell.Bounded() {
-		g, ok := polygon(cell.Boundary)
+		g, ok := c.polygon(cell.Boundary)
 		c.add(layerBoundary, "", g, ok, geojson.Properties{
 			"cell_kind":         cell.Kind.String(),
 			"floor":             cell.Floor.String(),
@@ -150,7 +175,7 @@ func (c *collection) addCell(cell *geometry.Cell) {
 		})
 	}
 	for _, o := range cell.Obstacles {
-		g, ok := footprint(o.Footprint)
+		g, ok := c.footprint(o.Footprint)
 		props := geojson.Properties{"name": o.Name, "z_min_m": metres(o.ZMin), "z_max_m": metres(o.ZMax)}
 		if o.Footprint.IsCircle() {
 			props["radius_m"] = metres(o.Footprint.Radius)
@@ -158,17 +183,17 @@ func (c *collection) addCell(cell *geometry.Cell) {
 		c.add(layerObstacle, fmt.Sprintf("%q", o.Name), g, ok, props)
 	}
 	for _, k := range cell.KeepOuts {
-		g, ok := footprint(k.Footprint)
+		g, ok := c.footprint(k.Footprint)
 		c.add(layerKeepOut, fmt.Sprintf("%q", k.Name), g, ok, geojson.Properties{"name": k.Name})
 	}
 	if col := cell.Collector; col != nil {
-		g, ok := point(col.Inlet.X, col.Inlet.Y)
+		g, ok := c.point(col.Inlet.X, col.Inlet.Y)
 		c.add(layerCollector, "", g, ok, geojson.Properties{
 			"diameter_m": metres(col.Diameter), "heading_deg": degrees(col.Heading), "z_m": metres(col.Inlet.Z),
 		})
 	}
 	for _, m := range cell.Marks {
-		g, ok := point(m.At[0], m.At[1])
+		g, ok := c.point(m.At[0], m.At[1])
 		c.add(layerMark, fmt.Sprintf("%q", m.Name), g, ok, geojson.Properties{"name": m.Name})
 	}
 }
@@ -183,7 +208,7 @@ func (c *collection) addStations(p *planner.Plan) {
 		if s.Stand != nil {
 			stand = s.Stand.Name
 		}
-		g, ok := point(s.Mic.X, s.Mic.Y)
+		g, ok := c.point(s.Mic.X, s.Mic.Y)
 		c.add(layerStation, fmt.Sprintf("%q", s.ID), g, ok, geojson.Properties{
 			"id": s.ID, "channel": s.Channel, "array": s.Array, "kind": kindName(s.Kind),
 			"status": status, "z_m": metres(s.Mic.Z), "height_m": metres(s.Height),
@@ -192,8 +217,8 @@ func (c *collection) addStations(p *planner.Plan) {
 	}
 	for i := range p.Stations {
 		s := &p.Stations[i]
-		mic, okMic := point(s.Mic.X, s.Mic.Y)
-		base, ok := point(s.Base[0], s.Base[1])
+		mic, okMic := c.point(s.Mic.X, s.Mic.Y)
+		base, ok := c.point(s.Base[0], s.Base[1])
 		if okMic && ok && base == mic {
 			continue
 		}

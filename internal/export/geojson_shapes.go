@@ -33,14 +33,27 @@ func roundPoint(x, y float64) (orb.Point, bool) {
 	return orb.Point{roundTo(x, lengthDecimals), roundTo(y, lengthDecimals)}, finite(x) && finite(y)
 }
 
-// point returns the rounded Point at (x, y), m.
-func point(x, y float64) (orb.Point, bool) { return roundPoint(x, y) }
+// degreeDecimals is the number of decimals of a longitude or latitude in
+// degrees: 1e-9° is 0.1 mm of latitude, the rounding of the cell frame.
+const degreeDecimals = 9
+
+// point returns the Point at the plan position (x, y), m: in the cell frame
+// rounded to 0.1 mm, or, when the layout has an anchor, the WGS 84
+// longitude and latitude rounded to 1e-9°; false when a coordinate is NaN
+// or ±Inf.
+func (c *collection) point(x, y float64) (orb.Point, bool) {
+	if c.anchor == nil || !finite(x) || !finite(y) {
+		return roundPoint(x, y)
+	}
+	lon, lat := c.anchor.ToWGS84(orb.Point{x, y})
+	return orb.Point{roundTo(lon, degreeDecimals), roundTo(lat, degreeDecimals)}, finite(lon) && finite(lat)
+}
 
 // path rounds pts and drops a vertex equal to the one before it.
-func path(pts []orb.Point) (orb.LineString, bool) {
+func (c *collection) path(pts []orb.Point) (orb.LineString, bool) {
 	out := make(orb.LineString, 0, len(pts))
 	for _, p := range pts {
-		q, ok := roundPoint(p[0], p[1])
+		q, ok := c.point(p[0], p[1])
 		if !ok {
 			return nil, false
 		}
@@ -55,8 +68,8 @@ func path(pts []orb.Point) (orb.LineString, bool) {
 // polygon returns the polygon with outline pts (open or closed, either
 // orientation): rounded, without repeated vertices, closed and
 // counter-clockwise.
-func polygon(pts []orb.Point) (orb.Polygon, bool) {
-	ls, ok := path(pts)
+func (c *collection) polygon(pts []orb.Point) (orb.Polygon, bool) {
+	ls, ok := c.path(pts)
 	if !ok || len(ls) == 0 {
 		return nil, ok
 	}
@@ -72,25 +85,25 @@ func polygon(pts []orb.Point) (orb.Polygon, bool) {
 
 // footprint returns a footprint's outline: its ring, or a disc as a
 // 64-gon (a Point for a disc of radius 0).
-func footprint(f geometry.Footprint) (orb.Geometry, bool) {
+func (c *collection) footprint(f geometry.Footprint) (orb.Geometry, bool) {
 	if !f.IsCircle() {
-		return polygon(f.Ring)
+		return c.polygon(f.Ring)
 	}
 	if f.Radius == 0 {
-		return point(f.Center[0], f.Center[1])
+		return c.point(f.Center[0], f.Center[1])
 	}
 	pts := make([]orb.Point, circleSides)
 	for i := range pts {
 		s, c := math.Sincos(2 * math.Pi * float64(i) / circleSides)
 		pts[i] = orb.Point{f.Center[0] + f.Radius*c, f.Center[1] + f.Radius*s}
 	}
-	return polygon(pts)
+	return c.polygon(pts)
 }
 
 // addJet adds the nozzle, the jet axis and the governing point's zones.
 func (c *collection) addJet(p *planner.Plan) {
 	fr := p.Request.Exit
-	g, ok := point(fr.Exit.X, fr.Exit.Y)
+	g, ok := c.point(fr.Exit.X, fr.Exit.Y)
 	c.add(layerNozzle, "", g, ok, geojson.Properties{"heading_deg": degrees(fr.Heading), "z_m": metres(fr.Exit.Z)})
 
 	// the axis reaches the end of the longest conservative zone of any point
@@ -108,7 +121,7 @@ func (c *collection) addJet(p *planner.Plan) {
 	}
 	if longest > 0 {
 		end := fr.ToCell(geometry.JetPoint{X: longest})
-		ls, ok := path([]orb.Point{vec2(fr.Exit), vec2(end)})
+		ls, ok := c.path([]orb.Point{vec2(fr.Exit), vec2(end)})
 		c.add(layerJetAxis, "", ls, ok, geojson.Properties{"length_m": metres(longest), "point": by, "zone": zone})
 	}
 
@@ -120,7 +133,7 @@ func (c *collection) addJet(p *planner.Plan) {
 		if e.Length == 0 || len(e.Points) < 2 {
 			continue // the jet never exceeds this limit: no zone
 		}
-		g, ok := zoneOutline(fr, e)
+		g, ok := c.zoneOutline(fr, e)
 		unit := "m/s"
 		if e.Zone == jet.HotZone {
 			unit = "K"
@@ -144,7 +157,7 @@ func zoneName(z jet.Zone) string {
 // zoneOutline returns the envelope's outline (x, ±r) in the horizontal plane
 // through the jet axis, in the cell frame: up the left side (r > 0) from the
 // exit to the tip, and back down the right side.
-func zoneOutline(fr geometry.JetFrame, e *jet.Envelope) (orb.Polygon, bool) {
+func (c *collection) zoneOutline(fr geometry.JetFrame, e *jet.Envelope) (orb.Polygon, bool) {
 	n := len(e.Points)
 	pts := make([]orb.Point, 0, 2*n)
 	for _, q := range e.Points {
@@ -154,7 +167,7 @@ func zoneOutline(fr geometry.JetFrame, e *jet.Envelope) (orb.Polygon, bool) {
 		q := e.Points[i]
 		pts = append(pts, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: -q[1]})))
 	}
-	return polygon(pts)
+	return c.polygon(pts)
 }
 
 // addArcs adds, for each arc array with two or more stations, a line through
@@ -179,7 +192,7 @@ func (c *collection) addArcs(p *planner.Plan) {
 		for j := 1; j < len(mics); j++ {
 			pts = append(pts, arcPieces(a.Centre, mics[j-1], mics[j])...)
 		}
-		ls, ok := path(pts)
+		ls, ok := c.path(pts)
 		c.add(layerArc, fmt.Sprintf("%q", a.Name), ls, ok, geojson.Properties{
 			"array": a.Name, "radius_m": metres(a.Radius), "centre_x_m": metres(a.Centre.X), "centre_y_m": metres(a.Centre.Y),
 		})

@@ -50,8 +50,8 @@ func byLayer(t *testing.T, fc *geojson.FeatureCollection) map[string][]*geojson.
 func TestGeoJSONLayers(t *testing.T) {
 	p := fixturePlan(t)
 	fc := writeGeoJSON(t, p)
-	if got := fc.ExtraMembers["coordinate_frame"]; got != "cell datum, metres, X/Y in plan" {
-		t.Errorf("coordinate_frame: got %v, want the cell-frame statement", got)
+	if got, _ := fc.ExtraMembers["coordinate_frame"].(string); !strings.HasPrefix(got, "LOCAL, NOT WGS 84: metres from the layout's datum") || fc.ExtraMembers["geographic"] != false {
+		t.Errorf("coordinate_frame: got %v, geographic %v; want the local-frame statement, false", got, fc.ExtraMembers["geographic"])
 	}
 	if got := fc.ExtraMembers["polar_angle_convention"]; got != "from_inlet" {
 		t.Errorf("polar_angle_convention: got %v, want from_inlet", got)
