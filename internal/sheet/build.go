@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"io"
+	"math"
 	"sort"
 	"strings"
 	"time"
@@ -204,26 +205,50 @@ func (b *builder) text(x, y, size float64, bold bool, s string) Text {
 func (b *builder) continuation() {
 	f := newFlow(b)
 	f.newPage()
-	hy := f.y
-	f.y += lineHeight(sizeHeading) + 1.5
-	title := "ELEVATION ALONG THE JET AXIS — x downstream of the nozzle exit, heights above the floor; each station at its axial position and height"
-	// half the sheet, or as much as it takes to reach the plan's scale
-	maxH := f.area.H * 0.5
-	if s, ok := b.elevationScale(f.area.W, maxH); !ok || s > b.model.Scale {
-		if s2, ok2 := b.elevationScale(f.area.W, f.area.H-(f.y-f.area.Y)); ok2 && s2 <= b.model.Scale {
-			maxH = f.area.H - (f.y - f.area.Y)
+	sys := b.req.Units
+	// the elevation and the clearance view share the horizontal scale
+	sx := 0
+	for _, sv := range []struct {
+		title string
+		make  func(x, y, w, maxH float64, sx int) (*sideView, bool)
+	}{
+		{"ELEVATION — vertical section through the jet axis: x downstream of the nozzle exit, heights above the floor; the zones are cut at the floor, the ceiling and the walls", b.elevation},
+		{"CLEARANCE VIEW — the jet's meridional half-plane: x downstream of the exit, r the distance from the jet axis; each station at its true x and r, so it is clear of a zone exactly when its mark is outside the zone's outline", b.clearance},
+	} {
+		for _, l := range b.m.wrap(clean(sv.title), f.area.W, sizeHeading, true) {
+			f.page.Texts = append(f.page.Texts, Text{X: f.area.X, Y: f.y + capHeight(sizeHeading) + 0.5, Size: sizeHeading, Bold: true, Text: l})
+			f.y += lineHeight(sizeHeading)
 		}
+		f.y += 1.5
+		maxH := math.Min(f.area.H*0.48, f.area.Bottom()-f.y-lineHeight(sizeBody)-2)
+		v, ok := sv.make(f.area.X, f.y, f.area.W, maxH, sx)
+		if !ok && sx != 0 {
+			// at a scale of its own rather than not at all
+			v, ok = sv.make(f.area.X, f.y, f.area.W, maxH, 0)
+		}
+		caption := "Not drawn: it fits no standard scale on this paper."
+		if ok {
+			view := View{Name: v.name, Frame: v.frame, Scale: v.sx, Shapes: v.shapes}
+			if v.sy != v.sx {
+				view.VScale = v.sy
+			}
+			f.page.Views = append(f.page.Views, view)
+			f.page.Labels = append(f.page.Labels, v.labels...)
+			f.page.Texts = append(f.page.Texts, v.texts...)
+			caption = "Scale " + ScaleName(v.sx, sys)
+			if v.sy != v.sx {
+				caption = "Horizontal scale " + ScaleName(v.sx, sys) + ", vertical " + ScaleName(v.sy, sys) + exaggeration(v.sx, v.sy) + "."
+			}
+			f.y += v.frame.H
+			sx = v.sx
+			if b.model.ElevationScale == 0 {
+				b.model.ElevationScale = v.sx
+			}
+		}
+		f.y += lineHeight(sizeBody)
+		f.page.Texts = append(f.page.Texts, Text{X: f.area.X, Y: f.y, Size: sizeBody, Bold: true, Text: clean(caption)})
+		f.y += 3
 	}
-	if ev, h, ok := b.elevation(f.area.X, f.y, f.area.W, maxH); ok {
-		f.page.Views = append(f.page.Views, View{Name: "elevation", Frame: ev.frame, Scale: b.model.ElevationScale, Shapes: ev.shapes})
-		f.page.Labels = append(f.page.Labels, ev.labels...)
-		f.page.Texts = append(f.page.Texts, ev.texts...)
-		title += " — scale " + ScaleName(b.model.ElevationScale, b.req.Units)
-		f.y += h + 4
-	} else {
-		title += " — not drawn: it fits no standard scale on this paper"
-	}
-	f.page.Texts = append(f.page.Texts, b.text(f.area.X, hy+capHeight(sizeHeading)+0.5, sizeHeading, true, title))
 	if len(b.model.Key) > 0 && !b.keyPlaced {
 		h := b.keyHeight(f.area.W)
 		f.ensure(h)

@@ -13,27 +13,36 @@ import (
 const mmPerPt = 25.4 / 72
 
 // transform maps metres of a view's world (plan: cell X, Y; elevation: jet
-// x, height) to page millimetres. It is the one place where metres become
-// millimetres.
+// x, height; clearance view: jet x, distance from the axis) to page
+// millimetres. It is the one place where metres become millimetres. The
+// vertical scale may differ from the horizontal one (a stated vertical
+// exaggeration in a side view); in the plan they are equal.
 type transform struct {
-	k      float64 // mm of page per m of world: 1000/scale
+	k      float64 // mm of page per m of world, horizontally: 1000/scale
+	ky     float64 // mm of page per m of world, vertically
 	ox, oy float64 // page position of world (0, 0), mm
 }
 
 // newTransform returns the transform at scale 1:scale that puts world point
 // (wx, wy) at page point p.
 func newTransform(scale int, wx, wy float64, p Pt) transform {
-	k := 1000 / float64(scale)
-	return transform{k: k, ox: p.X - wx*k, oy: p.Y + wy*k}
+	return newTransform2(scale, scale, wx, wy, p)
+}
+
+// newTransform2 returns the transform at 1:sx horizontally and 1:sy
+// vertically that puts world point (wx, wy) at page point p.
+func newTransform2(sx, sy int, wx, wy float64, p Pt) transform {
+	k, ky := 1000/float64(sx), 1000/float64(sy)
+	return transform{k: k, ky: ky, ox: p.X - wx*k, oy: p.Y + wy*ky}
 }
 
 // pt returns the page point of world point (x, y), world y up.
-func (t transform) pt(x, y float64) Pt { return Pt{t.ox + x*t.k, t.oy - y*t.k} }
+func (t transform) pt(x, y float64) Pt { return Pt{t.ox + x*t.k, t.oy - y*t.ky} }
 
 // world returns the world point of page point p.
-func (t transform) world(p Pt) (float64, float64) { return (p.X - t.ox) / t.k, (t.oy - p.Y) / t.k }
+func (t transform) world(p Pt) (float64, float64) { return (p.X - t.ox) / t.k, (t.oy - p.Y) / t.ky }
 
-// mm returns a world length (m) on the page, mm.
+// mm returns a world length (m) on the page, mm, horizontally.
 func (t transform) mm(m float64) float64 { return m * t.k }
 
 // add, sub, scale and unit are small vector helpers on page points.

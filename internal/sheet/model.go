@@ -159,11 +159,15 @@ func (t *Table) H() float64 {
 	return h
 }
 
-// View is a drawing clipped to its frame: the plan or the elevation.
+// View is a drawing clipped to its frame: the plan, the elevation, the
+// clearance view or a detail.
 type View struct {
-	Name   string // "plan" or "elevation"
-	Frame  Rect
-	Scale  int // denominator
+	Name  string // "plan", "elevation", "clearance" or "detail …"
+	Frame Rect
+	Scale int // denominator
+	// VScale is the vertical scale's denominator where it differs from
+	// Scale (a stated vertical exaggeration in a side view); 0 otherwise.
+	VScale int `json:",omitempty"`
 	Shapes []Shape
 }
 

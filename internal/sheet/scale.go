@@ -194,7 +194,11 @@ func gridSpacing(scale int, sys units.System, minMM float64) float64 {
 // trimNum prints v (a count of printing units) without trailing zeros:
 // "2", "2.5", "0.25".
 func trimNum(v float64) string {
-	return strconv.FormatFloat(math.Round(v*1e6)/1e6, 'f', -1, 64)
+	r := math.Round(v*1e6) / 1e6
+	if r == 0 {
+		r = 0 // no "-0"
+	}
+	return strconv.FormatFloat(r, 'f', -1, 64)
 }
 
 // scaleBarFor returns the scale bar for 1:scale: a round length of the

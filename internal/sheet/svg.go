@@ -269,9 +269,8 @@ func union(a, b Rect) Rect {
 // in the mark style) marks it. It returns an error wrapping
 // [ErrInvalidPlan] when neither is on the view.
 func (b *builder) viewTransform(view View, scale int) (transform, error) {
-	k := 1000 / float64(scale)
 	at := func(world [2]float64, page Pt) transform {
-		return transform{k: k, ox: page.X - world[0]*k, oy: page.Y + world[1]*k}
+		return newTransform(scale, world[0], world[1], page)
 	}
 	vel := envelopeOutline(b.gov.Plume.Envelope(jet.VelocityZone, jet.Conservative))
 	if vel != nil {
