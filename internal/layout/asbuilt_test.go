@@ -159,6 +159,10 @@ func FuzzDecodeAsBuilt(f *testing.F) {
 		"id,x,y,z\nA-01,1,2,-1\nA-01,1,2,1\n,1,2,1\nB-01,1 kg,2,9\nC-01,1,2\nD-01,1,2,3,4\n",
 		"id,x,y,z\n\"A-01,1,2,1\n",
 		"",
+		"\ufeffid;x;y;z\nA-01;5,1;7,2;1,4\n",
+		"id\tx\ty\tz\nA-01\t5.1\t7.2\t1.4\n",
+		"# comment; with, separators\nid;x_m;y_m;z_m;reasons\nA-01;1,5;2;0,5;a, b\n",
+		"id,x,y,z\nA-01,5\xe9,7,1\n",
 	} {
 		f.Add([]byte(s))
 	}

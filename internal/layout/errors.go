@@ -103,17 +103,18 @@ func (es Errors) Total() int {
 	return n
 }
 
-// summarise sorts es and keeps its first MaxProblems problems, replacing
-// the rest with one line that counts them and has no line of its own.
+// summarise sorts es and keeps its first MaxProblems problems; the next
+// one is kept too, with a count of the rest, which are dropped.
 func summarise(es Errors) Errors {
 	sortErrors(es)
 	if len(es) <= MaxProblems {
 		return es
 	}
 	rest := es[MaxProblems:]
-	last := &Error{File: es[0].File, Msg: fmt.Sprintf("… and %d more problems after line %d (fix the ones above and run again)", len(rest), es[MaxProblems-1].Line),
-		kind: rest[0].kind, more: len(rest) - 1}
-	return append(es[:MaxProblems:MaxProblems], last)
+	last := *rest[0]
+	last.Msg += fmt.Sprintf(" … and %d more %s after this one (fix these and run again)", len(rest)-1, plural(len(rest)-1, "problem", "problems"))
+	last.more = len(rest) - 1
+	return append(es[:MaxProblems:MaxProblems], &last)
 }
 
 // sortErrors orders es by line, then by field; problems at the same line and
@@ -161,4 +162,12 @@ func position(file string, line int, field string) string {
 		b.WriteString(": ")
 	}
 	return b.String()
+}
+
+// plural returns one or many after n.
+func plural(n int, one, many string) string {
+	if n == 1 {
+		return one
+	}
+	return many
 }

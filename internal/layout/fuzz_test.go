@@ -16,6 +16,7 @@ func FuzzDecode(f *testing.F) {
 	for _, pattern := range []string{
 		filepath.Join(repoRoot, "layouts", "*.yaml"),
 		filepath.Join(repoRoot, brokenDir, "*.yaml"),
+		filepath.Join(repoRoot, unplannableDir, "*.yaml"),
 	} {
 		files, err := filepath.Glob(pattern)
 		if err != nil {
@@ -38,6 +39,9 @@ func FuzzDecode(f *testing.F) {
 	f.Add([]byte("a: &x [*x]\n"))
 	f.Add([]byte("- 1\n- 2\n"))
 	f.Add([]byte("arcwright: 1\n---\n"))
+	f.Add([]byte("\ufeff" + baseLayout))
+	f.Add([]byte("arcwright: !custom 1\ntitle: {title: \"a\\x07\"}\n"))
+	f.Add([]byte("title:\n  date: 2026-02-30\n"))
 
 	f.Fuzz(func(t *testing.T, data []byte) {
 		const name = "fuzz.yaml"

@@ -98,7 +98,7 @@ func TestSummariseLongLists(t *testing.T) {
 		t.Errorf("Total: got %d, want 5000", got)
 	}
 	last := es[len(es)-1]
-	if !strings.Contains(last.Msg, "4950 more problems") || !errors.Is(last, ErrUnknownKey) {
+	if !strings.Contains(last.Msg, "4949 more problems after this one") || !errors.Is(last, ErrUnknownKey) || last.Line != es[len(es)-2].Line+1 {
 		t.Errorf("last line: got %q, want a count of the 4950 others", last)
 	}
 	if n := len(es.Error()); n > 16000 { // 51 lines of about 200 bytes; all 5000 would be about 1 MB
