@@ -17,7 +17,7 @@ func (c *collection) addCrew(p *planner.Plan) {
 			}
 		}
 		e := p.Crew[loud]
-		pt, ok := point(e.At.X, e.At.Y)
+		pt, ok := c.point(e.At.X, e.At.Y)
 		status, _ := verdictName(e.Status)
 		c.add(layerCrew, e.Name, pt, ok, geojson.Properties{
 			"name": e.Name, "z_m": metres(e.At.Z), "hours": sig(e.Hours),
@@ -33,7 +33,7 @@ func (c *collection) addNoise(m *planner.NoiseMap) {
 		ml := orb.MultiLineString{} // an empty list, not null, when the contour has no line
 		ok := true
 		for _, l := range k.Lines {
-			ls, good := path(l)
+			ls, good := c.path(l)
 			ok = ok && good
 			ml = append(ml, ls)
 		}

@@ -77,7 +77,7 @@ func (g Grid) Contours(level float64) []orb.LineString {
 			if bad || idx == 0 || idx == 15 {
 				continue
 			}
-			s := edgeKey{i, j, true}     // south
+			s := edgeKey{i, j, true}      // south
 			e := edgeKey{i + 1, j, false} // east
 			n := edgeKey{i, j + 1, true}  // north
 			w := edgeKey{i, j, false}     // west
