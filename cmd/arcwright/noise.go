@@ -6,6 +6,7 @@ import (
 	"io"
 	"math"
 	"strconv"
+	"strings"
 
 	"github.com/spf13/cobra"
 	"github.com/spf13/pflag"
@@ -191,10 +192,14 @@ func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustic
 	}
 	tw.Flush()
 	fmt.Fprintln(w, "\nMicrophone: "+acoustics.MicrophoneAdvice(l.OASPL, fTop))
-	if notes := src.Notes(); len(notes) > 0 {
+	notes := src.Notes()
+	if ratio := r / e.FullyExpandedDiameter; ratio < planner.DefaultLimits().FarFieldRatio {
+		notes = append(notes, fmt.Sprintf("the receiver is %.3g Dj from the source, short of the %.0f Dj of the acoustic far field (common practice): the prediction is a far-field one and near-field levels differ.", ratio, planner.DefaultLimits().FarFieldRatio))
+	}
+	if len(notes) > 0 {
 		fmt.Fprintln(w, "\nNotes")
 		for _, n := range notes {
-			fmt.Fprintln(w, "  - "+n)
+			fmt.Fprintln(w, "  - "+strings.ToUpper(n[:1])+n[1:])
 		}
 	}
 	fmt.Fprintln(w, "\n"+noiseCaution)

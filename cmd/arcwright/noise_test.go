@@ -62,7 +62,7 @@ func TestNoiseText(t *testing.T) {
 	if code != exitOK {
 		t.Fatalf("exit %d: %s", code, errOut)
 	}
-	for _, want := range []string{"OASPL", "dB(A)", "crest factor", "ARP 876", "shock-containing jet", "facility's procedures", "Microphone:"} {
+	for _, want := range []string{"OASPL", "dB(A)", "crest factor", "ARP 876", "Shock-containing jet", "facility's procedures", "Microphone:"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("output lacks %q:\n%s", want, out)
 		}

@@ -201,6 +201,9 @@ func (ck *checker) levelCheck(st *Station, arr *Array, t *tally) {
 	top := ck.req.Band.High
 	c := Check{Name: CheckLevel, Value: l.OASPL, Unit: "dB", Verdict: OK, Point: l.Point}
 	head := fmt.Sprintf("%.0f dB OASPL (±%.0f dB), %.0f dB(A), peak about %.0f dB(C) for %s", l.OASPL, l.Uncertainty, l.AWeighted, l.Peak, l.Point)
+	if st.Kind == NearField {
+		head += " (a far-field prediction: near-field levels differ)"
+	}
 	suggest := "no size in the typical-values table fits: split the band or choose from data sheets"
 	if cls, ok := acoustics.SmallestFit(l.OASPL, top); ok {
 		suggest = fmt.Sprintf("a %s microphone fits (typically %s and %.0f dB; from memory, check the data sheet)", cls.Name, frequencyWords(cls.UpperFrequencyLow), cls.MaxLevelLow)
