@@ -35,6 +35,7 @@ type Plume struct {
 	lightLayer float64
 	buoy       Buoyancy
 	env        [2][2]Envelope // [zone-1][variant-1]
+	bent       *BentPlume     // nil unless buoyancy bends the zones
 	flags      []Flag
 }
 
@@ -89,8 +90,21 @@ func NewPlumeWith(n Nozzle, c Condition, lim Limits, nominal, conservative Model
 	if err := p.finite(); err != nil {
 		return nil, err
 	}
+	if p.bends() {
+		p.buildBent()
+		if err := p.bent.finite(); err != nil {
+			return nil, err
+		}
+	}
 	p.flags = p.regimeFlags()
 	return p, nil
+}
+
+// bends reports whether a conservative zone reaches past the onset of
+// buoyancy (the FlagBuoyant regime): a light jet rises, a dense one sinks.
+func (p *Plume) bends() bool {
+	zone := math.Max(p.env[0][1].Length, p.env[1][1].Length)
+	return p.buoy.ReducedGravity != 0 && zone > p.buoy.Onset
 }
 
 // finite returns an error naming the first number of the prediction that is
