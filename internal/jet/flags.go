@@ -93,7 +93,7 @@ func (p *Plume) regimeFlags() []Flag {
 		if b.ReducedGravity < 0 {
 			dir = "down"
 		}
-		add(FlagBuoyant, "the %.3g m zone reaches beyond %.3g m, where buoyancy starts to bend the jet %s (x_b = 0.53, Chen & Rodi 1980; momentum length %.3g m); the zones are drawn straight and do not follow the bend", zone, b.Onset, dir, b.MomentumLength)
+		add(FlagBuoyant, "the %.3g m zone reaches beyond %.3g m, where buoyancy starts to bend the jet %s (x_b = 0.53, Chen & Rodi 1980; momentum length %.3g m); the stations are checked against the zones both about the straight axis and about the bent path of an integral model (wider scatter, about ±30 %% in rise)", zone, b.Onset, dir, b.MomentumLength)
 	}
 	switch n.Kind {
 	case Rectangular:

@@ -237,20 +237,33 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	mic := f.ToJet(st.Mic)
 	fixed, boom := ck.hardware(st)
 
-	// 1. zones, for every operating point, governing point first
+	// 1. zones, for every operating point, governing point first; a
+	// buoyant point's zones both about the axis and about its bent path
 	bestV, bestH := math.Inf(1), math.Inf(1)
+	var bentProbes []bentProbe
 	for _, k := range ck.order {
 		p := &ck.points[k]
+		bp := p.Plume.Bent()
+		if bp != nil && bentProbes == nil {
+			bentProbes = ck.bentProbes(st)
+		}
 		for _, z := range []struct {
 			name string
+			zone jet.Zone
 			env  *jet.Envelope
 			best *float64
 			what func() string
 		}{
-			{CheckVelocity, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %s)", ck.v(lim.Velocity)) }},
-			{CheckHot, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %s)", ck.t(lim.Temperature)) }},
+			{CheckVelocity, jet.VelocityZone, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %s)", ck.v(lim.Velocity)) }},
+			{CheckHot, jet.HotZone, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %s)", ck.t(lim.Temperature)) }},
 		} {
 			c, part := zoneClearance(z.env, fixed, boom, *z.best)
+			bent := false
+			if bp != nil {
+				if cb, pb := bentClearance(bp, z.zone, bentProbes, math.Min(c, *z.best)); cb < c || math.IsNaN(cb) {
+					c, part, bent = cb, pb, true
+				}
+			}
 			if _, seen := t.get(z.name); seen && c >= *z.best {
 				continue
 			}
@@ -260,6 +273,10 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 				ch.Verdict = Blocked
 			}
 			what := z.what
+			if bent {
+				plain := z.what
+				what = func() string { return plain() + ", bent by buoyancy," }
+			}
 			t.offer(ch, func(ch Check) (reason string) {
 				switch {
 				case math.IsInf(c, 1):

@@ -106,7 +106,7 @@ func hardwarePoints(s *Station) []r3.Vec {
 // only warn as well: zone checks never warn, they block.
 func TestSafetyInvariant(t *testing.T) {
 	rng := rand.New(rand.NewPCG(7, 11))
-	okSeen, usable := 0, 0
+	okSeen, usable, bentSeen := 0, 0, 0
 	for n := 0; n < 120; n++ {
 		req := randomRequest(rng)
 		p, err := New(req)
@@ -115,13 +115,41 @@ func TestSafetyInvariant(t *testing.T) {
 		}
 		lim := req.Limits.withDefaults()
 		solids := req.Cell.Solids()
+		boxes := map[[2]int]bentBox{}
+		for k, pt := range p.Points {
+			if bp := pt.Plume.Bent(); bp != nil {
+				for _, z := range []jet.Zone{jet.VelocityZone, jet.HotZone} {
+					boxes[[2]int{k, int(z)}] = newBentBox(bp, z)
+				}
+			}
+		}
 		for i := range p.Stations {
 			s := &p.Stations[i]
 			if s.Status == Blocked {
 				continue
 			}
 			usable++
-			for _, pt := range p.Points {
+			for k, pt := range p.Points {
+				// the bent zones of a buoyant point: every sampled point of
+				// the hardware outside them
+				if bp := pt.Plume.Bent(); bp != nil {
+					bentSeen++
+					for _, q := range hardwarePoints(s) {
+						j := req.Exit.ToJet(q)
+						v := q.Z - req.Exit.Exit.Z
+						l := math.Sqrt(math.Max(0, j.R*j.R-v*v))
+						for _, z := range []jet.Zone{jet.VelocityZone, jet.HotZone} {
+							// far outside the path's box, inflated by the
+							// largest radius: cannot be inside
+							if boxes[[2]int{k, int(z)}].far(j.X, v, l) {
+								continue
+							}
+							if c := bp.Clearance(z, j.X, v, l); c < 0 {
+								t.Fatalf("request %d, %s usable but at %v inside the bent %v of %s (%.3g m deep)", n, s.ID, q, z, pt.Name, -c)
+							}
+						}
+					}
+				}
 				for _, q := range hardwarePoints(s) {
 					j := req.Exit.ToJet(q)
 					u, t0, ts := pt.Plume.Velocity(j.X, j.R), pt.Plume.TotalTemperature(j.X, j.R), pt.Plume.Temperature(j.X, j.R)
@@ -164,8 +192,29 @@ func TestSafetyInvariant(t *testing.T) {
 			}
 		}
 	}
-	t.Logf("%d usable stations checked, %d of them OK", usable, okSeen)
+	t.Logf("%d usable stations checked, %d of them OK; %d station-point pairs against a bent plume", usable, okSeen, bentSeen)
 	if okSeen < 50 || usable < 1000 {
 		t.Errorf("only %d OK and %d usable stations over all requests: the property was barely exercised", okSeen, usable)
 	}
+}
+
+// bentBox is the bounding box of a bent path inflated by its largest zone
+// radius and outline tolerance.
+type bentBox struct{ xmin, xmax, vmin, vmax, pad float64 }
+
+func newBentBox(bp *jet.BentPlume, z jet.Zone) bentBox {
+	b := bentBox{math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1), 0}
+	for _, pt := range bp.Path {
+		b.xmin, b.xmax = math.Min(b.xmin, pt.X), math.Max(b.xmax, pt.X)
+		b.vmin, b.vmax = math.Min(b.vmin, pt.Z), math.Max(b.vmax, pt.Z)
+		b.pad = math.Max(b.pad, pt.Radius(z))
+	}
+	b.pad += bp.Tolerance
+	return b
+}
+
+// far reports whether (x, v, l) lies outside the box: it cannot be inside
+// the zone.
+func (b bentBox) far(x, v, l float64) bool {
+	return x < b.xmin-b.pad || x > b.xmax+b.pad || v < b.vmin-b.pad || v > b.vmax+b.pad || l > b.pad
 }
