@@ -255,6 +255,10 @@ func (b *builder) continuation() {
 		b.keyPanel(f.page, Rect{f.area.X, f.y, f.area.W, h})
 		f.y += h + 4
 	}
+	// the set-out table on a sheet of its own
+	f.newPage()
+	f.table(b.setOutTable())
+	f.gap(4)
 	f.heading("SET-UP STEPS (for this plan; positions from the datum)", 20)
 	f.columns(b.steps())
 	f.gap(3)

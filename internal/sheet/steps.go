@@ -169,14 +169,14 @@ func (b *builder) standSteps(ss []*planner.Station, say func(string, ...any)) {
 	for _, s := range ss {
 		if s.Stand != nil && s.Stand.BoomLength > 0 {
 			st = s.Stand
-			bases = append(bases, fmt.Sprintf("%s X %s, Y %s", s.ID, pr.length(s.Base[0]), pr.length(s.Base[1])))
+			bases = append(bases, s.ID)
 		}
 	}
 	if st == nil {
 		return
 	}
-	say("Stand %s has a %s boom: its pole stands on the side away from the jet and the boom reaches to the microphone. Set the bases at: %s.",
-		st.Name, pr.length(st.BoomLength), strings.Join(bases, "; "))
+	say("Stand %s has a %s boom: its pole stands on the side away from the jet and the boom reaches to the microphone. Set each base (%s) where the set-out table gives it, the boom pointing as the table says.",
+		st.Name, pr.length(st.BoomLength), idRangeOf(bases))
 }
 
 // aimSteps tells how to aim the microphones.
@@ -292,6 +292,14 @@ func runs(ss []*planner.Station, vals []float64, pr printer) []string {
 		i = j + 1
 	}
 	return out
+}
+
+// idRangeOf prints a list of IDs as "A-01 to A-13" when long.
+func idRangeOf(ids []string) string {
+	if len(ids) > 2 {
+		return ids[0] + " to " + ids[len(ids)-1]
+	}
+	return joinAnd(ids)
 }
 
 // idRange prints the IDs of neighbouring stations as "A-01 to A-05", or a

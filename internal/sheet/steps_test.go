@@ -139,3 +139,73 @@ func TestSetUpWording(t *testing.T) {
 		})
 	}
 }
+
+// TestSetOutTable: a table of its own that a technician works down: one
+// row per stand with the base from the datum, tapes from the two nearest
+// floor marks, the height, the boom, the aim and boxes to tick (issue 9
+// item 4: the base positions were in run-on prose).
+func TestSetOutTable(t *testing.T) {
+	p := chamberPlan(t)
+	m := build(t, p, sheet.Options{})
+	var rows [][]string
+	var heads []string
+	for pi, pg := range m.Pages {
+		for ti, tb := range pg.Tables {
+			if tb.Name != "setout" {
+				continue
+			}
+			if !tb.Continued && (ti != 0 || pi == 0) {
+				t.Errorf("the set-out table starts on sheet %d after another table, want it first on a sheet of its own", pi+1)
+			}
+			if heads == nil {
+				for _, c := range tb.Columns {
+					heads = append(heads, strings.Join(c.Heading, " "))
+				}
+			}
+			for _, r := range tb.Rows {
+				row := make([]string, len(r.Cells))
+				for i, c := range r.Cells {
+					row[i] = strings.Join(c, " ")
+				}
+				rows = append(rows, row)
+			}
+		}
+	}
+	if len(rows) != len(p.Stations) {
+		t.Fatalf("got %d set-out rows, want one per station (%d)", len(rows), len(p.Stations))
+	}
+	for _, w := range []string{"Base X", "Base Y", "Tape 1", "Tape 2", "Mic height", "Boom", "Aim", "Set", "As built"} {
+		found := false
+		for _, h := range heads {
+			found = found || strings.HasPrefix(h, w)
+		}
+		if !found {
+			t.Errorf("no column %q in %q", w, heads)
+		}
+	}
+	for _, r := range rows {
+		if r[0] != "CAM-01" {
+			continue
+		}
+		// base (5, −3.9): P2 (8, −4) is sqrt(9 + 0.01) = 3.002 m away, the
+		// datum sqrt(25 + 15.21) = 6.341 m (hand-computed)
+		if r[1] != "5.000" || r[2] != "-3.900" || r[3] != "P2: 3.002" || r[4] != "datum: 6.341" {
+			t.Errorf("CAM-01: got %q, want base 5.000, -3.900 and tapes P2: 3.002, datum: 6.341", r[:5])
+		}
+		if r[7] != "its own procedure" || r[8] != "[ ]" {
+			t.Errorf("CAM-01: got aim %q and set box %q", r[7], r[8])
+		}
+	}
+	blocked := 0
+	for i, s := range p.Stations {
+		if s.Status == planner.Blocked {
+			blocked++
+			if rows[i][8] != "DO NOT SET" {
+				t.Errorf("%s is blocked but its set box says %q", s.ID, rows[i][8])
+			}
+		}
+	}
+	if blocked == 0 {
+		t.Error("the fixture has no blocked station to check")
+	}
+}
