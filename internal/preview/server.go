@@ -58,6 +58,7 @@ type Server struct {
 	once   sync.Once
 
 	reloadMu sync.Mutex // one re-plan at a time
+	planned  fileStamp  // the file as the last re-plan found it, under reloadMu
 }
 
 // New returns a server for the layout file at path and plans it once. The
@@ -81,6 +82,7 @@ func (s *Server) Close() { s.once.Do(func() { close(s.closed) }) }
 func (s *Server) Reload() bool {
 	s.reloadMu.Lock()
 	defer s.reloadMu.Unlock()
+	s.planned = stamp(s.path)
 	next := s.plan()
 	s.mu.Lock()
 	prev := s.snap
@@ -105,6 +107,14 @@ func (s *Server) Reload() bool {
 	return true
 }
 
+// plannedStamp returns the file's size and time as the last re-plan found
+// them, before it read the file.
+func (s *Server) plannedStamp() fileStamp {
+	s.reloadMu.Lock()
+	defer s.reloadMu.Unlock()
+	return s.planned
+}
+
 // plan reads and plans the file and renders its outputs.
 func (s *Server) plan() *snapshot {
 	req, _, err := layout.Load(s.path)
@@ -117,13 +127,16 @@ func (s *Server) plan() *snapshot {
 	if err != nil {
 		return &snapshot{problems: s.problems(layout.Locate(req, err))}
 	}
+	// the JSON and the drawing at once: they only read the plan
 	var js, svg bytes.Buffer
-	if err := export.JSON(&js, p); err != nil {
-		return &snapshot{problems: s.problems(layout.Locate(req, err))}
-	}
+	jsErr := make(chan error, 1)
+	go func() { jsErr <- export.JSON(&js, p) }()
 	d, err := sheet.PlanView(p, sheet.Options{})
 	if err == nil {
 		err = d.WriteSVG(&svg)
+	}
+	if e := <-jsErr; e != nil {
+		err = e
 	}
 	if err != nil {
 		return &snapshot{problems: s.problems(layout.Locate(req, err))}

@@ -46,13 +46,15 @@ func (s *Server) Watch(ctx context.Context) error {
 			events, errs, every = w.Events, w.Errors, poll
 		}
 	}
-	// a change between the first plan and the watch's start
-	s.Reload()
 	timer := time.NewTimer(time.Hour)
 	timer.Stop()
 	tick := time.NewTicker(every)
 	defer tick.Stop()
 	last := stamp(abs)
+	if last != s.plannedStamp() {
+		// changed between the last plan and the watch's start
+		timer.Reset(0)
+	}
 	for {
 		select {
 		case <-ctx.Done():
@@ -77,8 +79,8 @@ func (s *Server) Watch(ctx context.Context) error {
 				timer.Reset(settle)
 			}
 		case <-timer.C:
-			last = stamp(abs)
 			s.Reload()
+			last = s.plannedStamp()
 		}
 	}
 }
