@@ -7,6 +7,8 @@ import (
 	"runtime/debug"
 	"strings"
 	"testing"
+
+	"arcwright/internal/layout"
 )
 
 // TestPlumeImplausibleFlags checks that values no test uses are refused on
@@ -297,5 +299,21 @@ func TestVersion(t *testing.T) {
 	want := "arcwright " + version + "\nmodule arcwright v1.2.3\ncommit 0123abc with uncommitted changes, committed 2026-12-02T06:00:00Z\nbuilt with go1.26.0\n"
 	if b.String() != want {
 		t.Errorf("got %q, want %q", b.String(), want)
+	}
+}
+
+// TestValidateSheetScaleWarns checks that a sheet that does not fit the
+// layout's paper and scale is a warning of validate, not an error: plan
+// without --pdf, or with --paper and --scale, still plans it.
+func TestValidateSheetScaleWarns(t *testing.T) {
+	dir := t.TempDir()
+	path := filepath.Join(dir, "L.yaml")
+	text := strings.Replace(string(layout.Starter()), `# scale: "1:50"`, `scale: "1:10"`, 1)
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	out, errOut, code := arc(t, "validate", path)
+	if code != exitOK || !strings.Contains(out, "warning: "+path+": sheet: scale does not fit") {
+		t.Errorf("got exit %d, %q %q, want 0 and a warning about the sheet", code, out, errOut)
 	}
 }

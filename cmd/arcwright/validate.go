@@ -1,8 +1,10 @@
 package main
 
 import (
+	"errors"
 	"fmt"
 	"io"
+	"strings"
 	"math"
 
 	"github.com/spf13/cobra"
@@ -37,33 +39,36 @@ Exit status: 0 when the layout is valid, 1 otherwise, 2 on a bad command line.`,
 			if err != nil {
 				return err
 			}
-			if err := planCheck(req); err != nil {
+			more, err := planCheck(req)
+			if err != nil {
 				return err
 			}
-			return summary(stdout, req, warnings)
+			return summary(stdout, req, append(warnings, more...))
 		},
 	}
 }
 
 // planCheck plans req and writes the sheet and every export to nowhere,
 // so that validate refuses whatever plan would refuse, at the line and key
-// of the layout.
-func planCheck(req *planner.Request) error {
+// of the layout. A sheet that does not fit the layout's paper and scale is
+// a warning: plan --pdf can choose others with --paper and --scale.
+func planCheck(req *planner.Request) ([]layout.Warning, error) {
 	p, err := planner.New(req)
 	if err != nil {
-		return layout.Locate(req, err)
+		return nil, layout.Locate(req, err)
 	}
-	for _, write := range []func(io.Writer) error{
-		func(w io.Writer) error { return sheet.Write(w, p, sheet.Options{}) },
-		func(w io.Writer) error { return export.CSV(w, p) },
-		func(w io.Writer) error { return export.JSON(w, p) },
-		func(w io.Writer) error { return export.GeoJSON(w, p) },
-	} {
-		if err := write(io.Discard); err != nil {
-			return layout.Locate(req, err)
+	var warns []layout.Warning
+	if err := sheet.Write(io.Discard, p, sheet.Options{}); errors.Is(err, sheet.ErrScale) {
+		warns = append(warns, layout.Warning{File: req.Source, Field: "sheet", Msg: strings.TrimPrefix(err.Error(), "sheet: ") + " (plan --pdf needs --paper or --scale)"})
+	} else if err != nil {
+		return nil, layout.Locate(req, err)
+	}
+	for _, write := range []func(io.Writer, *planner.Plan) error{export.CSV, export.JSON, export.GeoJSON} {
+		if err := write(io.Discard, p); err != nil {
+			return nil, layout.Locate(req, err)
 		}
 	}
-	return nil
+	return warns, nil
 }
 
 // summary prints what a layout holds.
