@@ -4,8 +4,8 @@ import (
 	"errors"
 	"fmt"
 	"io"
-	"strings"
 	"math"
+	"strings"
 
 	"github.com/spf13/cobra"
 
