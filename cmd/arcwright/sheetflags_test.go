@@ -1,10 +1,13 @@
 package main
 
 import (
+	"math"
 	"os"
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"arcwright/internal/sheet"
 )
 
 // TestPlanSheetFlags: a bad --paper or --scale is refused before any work
@@ -74,5 +77,46 @@ func TestLargeSite(t *testing.T) {
 	_, errOut, code := arc(t, "plan", filepath.Join("testdata", "large-site.yaml"), "--pdf", pdf, "--paper", "A4", "--scale", "1:500")
 	if code != exitError || !strings.Contains(errOut, "fits on A4") || !strings.Contains(errOut, "A1 paper holds it at 1:500") {
 		t.Errorf("got exit %d, stderr %q; want exit 1 naming the scale and the paper that fit", code, errOut)
+	}
+}
+
+// TestDemoPlanFills: each demo's plan fills at least half the plan's frame
+// in one direction (issue 9 item 3: the chamber drawn at 1:100 filled about
+// a quarter). What is drawn is the bound of the cell, the obstacles, the
+// arrays and the station marks inside the frame; the grid and the axis run
+// across the whole frame and are left out.
+func TestDemoPlanFills(t *testing.T) {
+	drawn := map[sheet.Style]bool{
+		sheet.StyleBoundary: true, sheet.StyleTreatment: true, sheet.StyleObstacle: true, sheet.StyleKeepOut: true,
+		sheet.StyleArray: true, sheet.StyleMark: true, sheet.StyleNozzle: true,
+	}
+	for _, d := range demos {
+		t.Run(d, func(t *testing.T) {
+			p, err := loadPlan(filepath.Join(demoDir, d+".yaml"), "", "")
+			if err != nil {
+				t.Fatal(err)
+			}
+			m, err := sheet.Build(p, sheet.Options{})
+			if err != nil {
+				t.Fatal(err)
+			}
+			v := m.Pages[0].Views[0]
+			f := v.Frame
+			x0, y0, x1, y1 := math.Inf(1), math.Inf(1), math.Inf(-1), math.Inf(-1)
+			for _, sh := range v.Shapes {
+				if !drawn[sh.Style] {
+					continue
+				}
+				for _, q := range sh.Points {
+					q.X, q.Y = math.Max(f.X, math.Min(f.Right(), q.X)), math.Max(f.Y, math.Min(f.Bottom(), q.Y))
+					x0, y0, x1, y1 = math.Min(x0, q.X), math.Min(y0, q.Y), math.Max(x1, q.X), math.Max(y1, q.Y)
+				}
+			}
+			fw, fh := (x1-x0)/f.W, (y1-y0)/f.H
+			t.Logf("1:%d fills %.0f %% × %.0f %%", m.Scale, 100*fw, 100*fh)
+			if fw < 0.5 && fh < 0.5 {
+				t.Errorf("at 1:%d the plan fills %.0f %% of the frame's width and %.0f %% of its height, want half in one direction", m.Scale, 100*fw, 100*fh)
+			}
+		})
 	}
 }

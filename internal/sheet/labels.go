@@ -182,7 +182,7 @@ func (v *planView) featureLabels() {
 	pr := b.pr
 	c := &b.req.Cell
 	diag := unit(Pt{1, -1}, Pt{1, 0})
-	if !v.placeText("DATUM (0, 0)", FeatureLabel, "datum", sizeSmall, v.t.pt(0, 0), unit(Pt{-1, 1}, Pt{1, 0}), 2.3, featFar) {
+	if !v.datumOut && !v.placeText("DATUM (0, 0)", FeatureLabel, "datum", sizeSmall, v.t.pt(0, 0), unit(Pt{-1, 1}, Pt{1, 0}), 2.3, featFar) {
 		v.notes = append(v.notes, "The datum symbol marks (0, 0).")
 	}
 	for _, m := range c.Marks {

@@ -31,6 +31,7 @@ type planView struct {
 	// hazardLabels are the words of the warning triangles, placed before
 	// every other callout
 	hazardLabels []callout
+	datumOut     bool // the datum lies outside the frame and is not drawn
 }
 
 // planExtent returns the cell-frame rectangle the plan must show, m: the

@@ -16,6 +16,13 @@ func (v *planView) floorMarks() {
 func (v *planView) datum() {
 	p := v.t.pt(0, 0)
 	const r = 2.0
+	// the symbol, its arrows and their letters must lie inside the frame;
+	// a datum outside the view (a cropped site) is said in the notes
+	if !v.frame.inset(1).Contains(Rect{p.X - r - 1, p.Y - r - 11, 2*r + 12, 2*r + 12}) {
+		v.datumOut = true
+		v.notes = append(v.notes, "The datum (0, 0) lies outside this view: the grid figures still measure from it.")
+		return
+	}
 	v.shapes = append(v.shapes, datumSymbol(p, r)...)
 	v.shapes = append(v.shapes, arrow(StyleTick, add(p, Pt{r, 0}), add(p, Pt{r + 7, 0}), 1.2)...)
 	v.shapes = append(v.shapes, arrow(StyleTick, add(p, Pt{0, -r}), add(p, Pt{0, -r - 7}), 1.2)...)
