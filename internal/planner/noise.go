@@ -284,6 +284,12 @@ func (ck *checker) crewExposures() []CrewExposure {
 			}
 			e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
 				l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(c.Hours), e.Class, durationWords(e.AllowedHours))
+			if zone := ck.crewZone(k, c.At); zone != "" {
+				e.Status = Blocked
+				e.Reason = "inside the " + zone + " of " + e.Point + ": no one may stand here during its runs; " + e.Reason
+				out = append(out, e)
+				continue
+			}
 			switch e.Status {
 			case Blocked:
 				e.Reason += ": do not stay here during runs of " + e.Point + " without hearing protection chosen under the site's hearing-conservation procedures"
@@ -294,6 +300,23 @@ func (ck *checker) crewExposures() []CrewExposure {
 		}
 	}
 	return out
+}
+
+// crewZone names the conservative zone of point k, with the layout's
+// margin, that holds pos (cell frame, m), or returns "".
+func (ck *checker) crewZone(k int, pos r3.Vec) string {
+	p := &ck.points[k]
+	q := ck.req.Exit.ToJet(pos)
+	margin := ck.req.Limits.withDefaults().Margin
+	for _, z := range []struct {
+		name string
+		env  *jet.Envelope
+	}{{"velocity zone", p.Velocity()}, {"hot zone", p.Hot()}} {
+		if z.env.Length > 0 && z.env.Clearance(q.X, q.R) < margin {
+			return z.name
+		}
+	}
+	return ""
 }
 
 // hoursWords prints a number of hours.

@@ -160,3 +160,17 @@ func TestCrewExposure(t *testing.T) {
 		t.Errorf("8 h at %.0f dB(A): got %v, want blocked", p.Crew[0].AWeighted, p.Crew[0].Status)
 	}
 }
+
+// TestCrewInZone checks that a crew position inside a conservative zone (or
+// its margin) is blocked whatever the noise says.
+func TestCrewInZone(t *testing.T) {
+	req, lc := freeRoom(t)
+	onAxis := r3.Vec{X: req.Exit.Exit.X + 2*lc, Y: req.Exit.Exit.Y, Z: req.Exit.Exit.Z}
+	req.Crew = []Crew{{Name: "in the jet", At: onAxis, Hours: 1.0 / 3600}}
+	p := mustPlan(t, req)
+	for _, e := range p.Crew {
+		if e.Status != Blocked || !strings.Contains(e.Reason, "inside the velocity zone") {
+			t.Errorf("%s: got %v %q, want blocked inside the velocity zone", e.Point, e.Status, e.Reason)
+		}
+	}
+}
