@@ -360,7 +360,7 @@ func (ck *checker) noiseWarnings(plan *Plan) []string {
 			if n > 1 {
 				others = fmt.Sprintf(" (and %d other %s)", n-1, plural(n-1, "point", "points"))
 			}
-			w = append(w, fmt.Sprintf("crew position %s passes an exposure limit for %s%s: %s", e.Name, e.Point, others, e.Reason))
+			w = append(w, fmt.Sprintf("crew position %s, %s%s: %s", e.Name, e.Point, others, e.Reason))
 		}
 		i = j
 	}
