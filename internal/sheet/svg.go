@@ -425,7 +425,8 @@ func verdictName(v planner.Verdict) string {
 // Hatching becomes SVG patterns, dash patterns stroke-dasharray. The zones
 // the sheet draws are the group of class "zones" with an empty data-point;
 // each operating point's zones follow in a hidden group whose data-point
-// is its name. Each station is a group of class "station" with data-id and
+// is its name; labels that name a zone have the class "zone-label", to be
+// hidden with another point's zones. Each station is a group of class "station" with data-id and
 // data-verdict, coloured and shaped by its verdict. The output depends only
 // on the drawing.
 //
@@ -498,7 +499,7 @@ func (d *PlanDrawing) WriteSVG(w io.Writer) error {
 	}
 	for _, l := range d.Labels {
 		cls := "label"
-		if strings.Contains(l.For, "zone") {
+		if strings.Contains(l.For, "zone") || strings.Contains(l.Text, "zone") {
 			cls += " zone-label"
 		}
 		s.printf(`<g class="%s" data-for="%s">`, cls, esc(l.For))

@@ -200,7 +200,7 @@ func TestWriteSVG(t *testing.T) {
 		t.Fatalf("got root %v, want an svg with a size", els[0])
 	}
 	points := map[string]bool{}
-	var sheetZones, labels, texts int
+	var sheetZones, labels, zoneLabels, texts int
 	for _, e := range els {
 		switch {
 		case e.Name == "g" && e.Attr["class"] == "zones":
@@ -217,6 +217,9 @@ func TestWriteSVG(t *testing.T) {
 			}
 		case e.Name == "g" && strings.HasPrefix(e.Attr["class"], "label"):
 			labels++
+			if strings.Contains(e.Attr["class"], "zone-label") {
+				zoneLabels++
+			}
 		case e.Name == "text":
 			texts++
 		}
@@ -228,6 +231,10 @@ func TestWriteSVG(t *testing.T) {
 		if !points[pt.Name] {
 			t.Errorf("no zones for point %s", pt.Name)
 		}
+	}
+	// the zones' names, hidden in the page with another point's zones
+	if zoneLabels == 0 {
+		t.Error("no label is marked as naming a zone")
 	}
 	if labels != len(d.Labels) || labels == 0 {
 		t.Errorf("got %d labels in the SVG, the drawing has %d", labels, len(d.Labels))
