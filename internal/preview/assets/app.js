@@ -14,13 +14,16 @@
   const FT = 0.3048;      // m per international foot
   function len(m) {
     if (m === null || m === undefined) return "–";
-    if (status && status.units === "imperial") return (m / FT).toFixed(2) + " ft";
+    if (imperial()) return (m / FT).toFixed(2) + " ft";
     return m.toFixed(3) + " m";
   }
+  function imperial() { return status && status.units === "imperial"; }
   function num(v, unit) {
     if (v === null || v === undefined) return "–";
     if (typeof v === "boolean") return v ? "yes" : "no";
     if (unit === "m") return len(v);
+    if (unit === "m/s" && imperial()) return num(v / FT, "ft/s");
+    if (unit === "K") return imperial() ? ((v - 273.15) * 9 / 5 + 32).toFixed(1) + " °F" : (v - 273.15).toFixed(1) + " °C";
     const s = Math.abs(v) >= 100 ? v.toFixed(0) : Math.abs(v) >= 10 ? v.toFixed(1) : v.toPrecision(3);
     return unit ? s + " " + unit : s;
   }
