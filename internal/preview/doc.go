@@ -20,5 +20,8 @@
 //	GET /events      Server-Sent Events: an event "plan" each time the plan changes
 //
 // The server is read-only: it answers GET and HEAD only, and no part of a
-// request reaches the file system.
+// request reaches the file system. [LoopbackOnly] keeps a server on
+// loopback from answering requests addressed to other host names. When the
+// file's folder cannot be watched, Watch compares the file's size and time
+// four times a second instead.
 package preview
