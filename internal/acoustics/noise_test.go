@@ -333,3 +333,23 @@ func FuzzNoise(f *testing.F) {
 		}
 	})
 }
+
+// TestLevelFallsWithDistance is a property test: in a free field, with or
+// without air absorption, every level falls as the receiver moves away
+// along a ray, over jets from model to full scale (inverse-square
+// spreading, acoustics.md §0; absorption only adds loss).
+func TestLevelFallsWithDistance(t *testing.T) {
+	for _, j := range []Jet{coldJet(0.5, 0.0254), coldJet(0.9, 0.0508), coldJet(1.5, 0.0508), isothermalJet(0.7, 1)} {
+		s := mustSource(t, j)
+		for _, th := range []float64{10, 45, 90, 135, 170} {
+			prev := Levels{OASPL: math.Inf(1), AWeighted: math.Inf(1), CWeighted: math.Inf(1), Peak: math.Inf(1)}
+			for r := 0.5; r < 500; r *= 1.5 {
+				l := mustAt(t, s, Path{Distance: r, Polar: deg(th)})
+				if !(l.OASPL < prev.OASPL && l.AWeighted < prev.AWeighted && l.CWeighted < prev.CWeighted && l.Peak < prev.Peak) {
+					t.Fatalf("Uj %.0f m/s, %g°: level rose from %+v to %+v at %.3g m", j.Velocity, th, prev, l, r)
+				}
+				prev = l
+			}
+		}
+	}
+}

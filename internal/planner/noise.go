@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 
+	"github.com/paulmach/orb"
 	"github.com/paulmach/orb/planar"
 	"gonum.org/v1/gonum/spatial/r3"
 
@@ -289,6 +290,9 @@ func (ck *checker) crewExposures() []CrewExposure {
 				e.Reason = "inside the " + zone + " of " + e.Point + ": no one may stand here during its runs; " + e.Reason
 				out = append(out, e)
 				continue
+			}
+			if cell := &ck.req.Cell; cell.Bounded() && cell.Kind != geometry.OutdoorPad && !cell.Contains(orb.Point{c.At.X, c.At.Y}) {
+				e.Reason += "; outside the cell, the level leaves out the walls' sound insulation (an upper bound)"
 			}
 			switch e.Status {
 			case Blocked:
