@@ -17,6 +17,7 @@ import (
 // along the jet axis, v above it, l beside the vertical plane through it
 // (m), with the radius of the part about the point (m).
 type bentProbe struct {
+	c            r3.Vec // the point in the cell frame, m
 	x, v, l, pen float64
 	part         string
 }
@@ -30,12 +31,7 @@ const bentPoleStep = 0.05
 // bent-zone probes. Every point of the pole and boom lies within its
 // probe's pen of a probe.
 func (ck *checker) bentProbes(st *Station) []bentProbe {
-	f := ck.req.Exit
-	at := func(c r3.Vec, pen float64, part string) bentProbe {
-		j := f.ToJet(c)
-		v := c.Z - f.Exit.Z
-		return bentProbe{x: j.X, v: v, l: math.Sqrt(math.Max(0, j.R*j.R-v*v)), pen: pen, part: part}
-	}
+	at := ck.probeAt
 	out := []bentProbe{at(st.Mic, 0, "microphone")}
 	s := st.Stand
 	if s == nil {

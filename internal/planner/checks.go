@@ -131,6 +131,7 @@ type checker struct {
 	srcPoint  string // the point whose source region is longest
 	maxFoot   float64
 	splashes  []splash    // where zones strike obstacles
+	attached  []Attached  // zones carried on by the floor, ceiling and walls
 	fresnel   [][]float64 // L²/λ per point and band, m
 	noise     *noiseModel // level predictions
 }
@@ -244,7 +245,7 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	for _, k := range ck.order {
 		p := &ck.points[k]
 		bp := p.Plume.Bent()
-		if bp != nil && bentProbes == nil {
+		if (bp != nil || len(ck.attached) > 0) && bentProbes == nil {
 			bentProbes = ck.bentProbes(st)
 		}
 		for _, z := range []struct {
@@ -264,6 +265,12 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 					c, part, bent = cb, pb, true
 				}
 			}
+			var wall *Attached
+			if len(ck.attached) > 0 {
+				if ca, pa, a := ck.attachedClearance(p.Name, z.zone, bentProbes); ca < c || math.IsNaN(ca) {
+					c, part, bent, wall = ca, pa, false, a
+				}
+			}
 			if _, seen := t.get(z.name); seen && c >= *z.best {
 				continue
 			}
@@ -273,9 +280,17 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 				ch.Verdict = Blocked
 			}
 			what := z.what
-			if bent {
+			switch {
+			case bent:
 				plain := z.what
 				what = func() string { return plain() + ", bent by buoyancy," }
+			case wall != nil:
+				plain := z.what
+				how := "carried along the " + wall.Surface + " as a wall jet"
+				if wall.Radial {
+					how = "spread over the wall it strikes"
+				}
+				what = func() string { return plain() + ", " + how + "," }
 			}
 			t.offer(ch, func(ch Check) (reason string) {
 				switch {

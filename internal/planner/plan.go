@@ -227,8 +227,12 @@ type Plan struct {
 	// hot zone the sheet draws.
 	GoverningHot int
 	Arrays       []ArrayResult
-	Stations     []Station
-	Absorption   []AbsorptionRow
+	// Attached lists the zones that the floor, the ceiling and the walls
+	// carry on where the free zones reach them (wall jets), for every
+	// operating point.
+	Attached   []Attached
+	Stations   []Station
+	Absorption []AbsorptionRow
 	// Crew is every crew position's exposure, one entry per operating
 	// point, crew positions in layout order.
 	Crew     []CrewExposure

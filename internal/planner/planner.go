@@ -62,6 +62,8 @@ func New(req *Request) (*Plan, error) {
 	}
 	ck.indexSolids(plan.Stations)
 	ck.splashes = ck.findSplashes()
+	ck.attached = ck.attachedZones()
+	plan.Attached = ck.attached
 	ck.checkStations(plan, placed)
 	ck.summarisePlan(plan, placed)
 	return plan, nil

@@ -106,7 +106,7 @@ func hardwarePoints(s *Station) []r3.Vec {
 // only warn as well: zone checks never warn, they block.
 func TestSafetyInvariant(t *testing.T) {
 	rng := rand.New(rand.NewPCG(7, 11))
-	okSeen, usable, bentSeen := 0, 0, 0
+	okSeen, usable, bentSeen, attachedSeen := 0, 0, 0, 0
 	for n := 0; n < 120; n++ {
 		req := randomRequest(rng)
 		p, err := New(req)
@@ -129,6 +129,15 @@ func TestSafetyInvariant(t *testing.T) {
 				continue
 			}
 			usable++
+			// the zones that the floor, ceiling and walls carry on
+			for _, a := range p.Attached {
+				attachedSeen++
+				for _, q := range hardwarePoints(s) {
+					if a.Solid.Contains(q) {
+						t.Fatalf("request %d, %s usable but at %v inside the %v carried by the %s for %s", n, s.ID, q, a.Zone, a.Surface, a.Point)
+					}
+				}
+			}
 			for k, pt := range p.Points {
 				// the bent zones of a buoyant point: every sampled point of
 				// the hardware outside them
@@ -192,7 +201,7 @@ func TestSafetyInvariant(t *testing.T) {
 			}
 		}
 	}
-	t.Logf("%d usable stations checked, %d of them OK; %d station-point pairs against a bent plume", usable, okSeen, bentSeen)
+	t.Logf("%d usable stations checked, %d of them OK; %d station-point pairs against a bent plume, %d against an attached zone", usable, okSeen, bentSeen, attachedSeen)
 	if okSeen < 50 || usable < 1000 {
 		t.Errorf("only %d OK and %d usable stations over all requests: the property was barely exercised", okSeen, usable)
 	}
