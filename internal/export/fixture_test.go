@@ -120,6 +120,9 @@ func buildFixture() (*planner.Plan, error) {
 		if plan.Points[i].Velocity().Length > plan.Points[plan.Governing].Velocity().Length {
 			plan.Governing = i
 		}
+		if plan.Points[i].Hot().Length > plan.Points[plan.GoverningHot].Hot().Length {
+			plan.GoverningHot = i
+		}
 	}
 	boom, probe := &req.Stands[0], &req.Stands[1]
 

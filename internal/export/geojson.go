@@ -24,19 +24,21 @@ const (
 
 // Layer names: the "layer" property of every feature.
 const (
-	layerBoundary  = "boundary"
-	layerObstacle  = "obstacle"
-	layerKeepOut   = "keep_out"
-	layerCollector = "collector"
-	layerMark      = "mark"
-	layerNozzle    = "nozzle"
-	layerJetAxis   = "jet_axis"
-	layerZone      = "zone"
-	layerArc       = "arc"
-	layerStation   = "station"
-	layerStandBase = "stand_base"
-	layerNoise     = "noise_contour"
-	layerCrew      = "crew"
+	layerBoundary   = "boundary"
+	layerObstacle   = "obstacle"
+	layerKeepOut    = "keep_out"
+	layerCollector  = "collector"
+	layerMark       = "mark"
+	layerNozzle     = "nozzle"
+	layerJetAxis    = "jet_axis"
+	layerZone       = "zone"
+	layerZoneMargin = "zone_margin"
+	layerCore       = "core"
+	layerArc        = "arc"
+	layerStation    = "station"
+	layerStandBase  = "stand_base"
+	layerNoise      = "noise_contour"
+	layerCrew       = "crew"
 )
 
 // GeoJSON writes p to w as a GeoJSON FeatureCollection, compact, followed
@@ -62,9 +64,19 @@ const (
 //	mark        Point: name
 //	nozzle      Point at the exit centre: heading_deg, z_m
 //	jet_axis    LineString from the exit to the end of the longest conservative zone of any point
-//	zone        Polygon: the governing point's conservative velocity and hot zones in the
-//	            horizontal plane through the axis, the outline (x, ±r) in the cell frame;
-//	            zone ("velocity" or "hot"), point, limit, limit_unit
+//	zone        Polygon (MultiPolygon where the boundary cuts it apart): the zones the sheet
+//	            draws, in the horizontal plane through the axis: the governing point's
+//	            conservative velocity zone and the conservative hot zone of Plan.GoverningHot
+//	            (the longest); zone ("velocity" or "hot"), point, variant, limit, limit_unit,
+//	            length_m, max_radius_m, margin_m, cut
+//	zone_margin the same zones grown by the layout's margin (the sheet's dotted band), same
+//	            properties
+//	core        Polygon: the governing point's nominal potential core, as the sheet draws it
+//
+// In a bounded cell the zones, margins and core are cut at the boundary as
+// the sheet cuts them ("cut" true when the boundary cut the shape; a zone
+// wholly outside is left out).
+//
 //	arc         LineString through the stations of each arc array, following the arc
 //	station     Point at the microphone: id, channel, array, status, z_m, polar_deg
 //	stand_base  Point at the stand pole, where it differs from the microphone's plan position

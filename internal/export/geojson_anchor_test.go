@@ -51,3 +51,36 @@ func TestGeoJSONAnchor(t *testing.T) {
 		}
 	}
 }
+
+// TestGeoJSONZonesCut: the zones, their margins and the core are cut at
+// the boundary where the sheet stops drawing them (issue 10 item 16): with
+// the downstream wall moved to half the velocity zone's length, the zone
+// ends at the wall, says "cut", and keeps its area inside the room.
+func TestGeoJSONZonesCut(t *testing.T) {
+	p := fixturePlan(t)
+	vel := p.Points[p.Governing].Velocity()
+	wall := vel.Length / 2
+	p.Request.Cell.Boundary = orb.Ring{{-3, -6}, {wall, -6}, {wall, 6}, {-3, 6}, {-3, -6}}
+	layers := byLayer(t, writeGeoJSON(t, p))
+	found := false
+	for _, layer := range []string{"zone", "zone_margin"} {
+		for _, f := range layers[layer] {
+			b := f.Geometry.Bound()
+			if b.Max[0] > wall+1e-4 {
+				t.Errorf("%s %v: reaches x = %v m, past the wall at %v m", layer, f.Properties["zone"], b.Max[0], wall)
+			}
+			if layer == "zone" && f.Properties["zone"] == "velocity" {
+				found = true
+				if f.Properties["cut"] != true || math.Abs(b.Max[0]-wall) > 1e-4 {
+					t.Errorf("velocity zone: cut %v, ends at %v m; want cut at the wall, %v m", f.Properties["cut"], b.Max[0], wall)
+				}
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no velocity zone")
+	}
+	if len(layers["zone_margin"]) == 0 || len(layers["core"]) != 1 {
+		t.Errorf("got %d margin bands and %d cores, want the margins and the core the sheet draws", len(layers["zone_margin"]), len(layers["core"]))
+	}
+}

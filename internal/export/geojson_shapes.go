@@ -6,6 +6,7 @@ import (
 
 	"github.com/paulmach/orb"
 	"github.com/paulmach/orb/geojson"
+	"github.com/paulmach/orb/planar"
 	"gonum.org/v1/gonum/spatial/r3"
 
 	"arcwright/internal/geometry"
@@ -125,25 +126,115 @@ func (c *collection) addJet(p *planner.Plan) {
 		c.add(layerJetAxis, "", ls, ok, geojson.Properties{"length_m": metres(longest), "point": by, "zone": zone})
 	}
 
-	if len(p.Points) == 0 || p.Points[p.Governing].Plume == nil {
+	c.addZones(p)
+}
+
+// addZones adds the zones the sheet draws, cut as it cuts them: the
+// conservative velocity zone of the governing point and the conservative
+// hot zone of the point with the longest one (Plan.GoverningHot), each with
+// its margin band (the zone grown by the margin, jet.GrowOutline), and the
+// governing point's nominal potential core; in a bounded cell each is cut
+// at the boundary, where the sheet stops drawing it (the free jet does not
+// go on through a wall; the plan warns where a zone meets one).
+func (c *collection) addZones(p *planner.Plan) {
+	if len(p.Points) == 0 {
 		return
 	}
-	gov := &p.Points[p.Governing]
-	for _, e := range []*jet.Envelope{gov.Velocity(), gov.Hot()} {
-		if e.Length == 0 || len(e.Points) < 2 {
+	r := p.Request
+	fr := r.Exit
+	margin := r.Limits.WithDefaults().Margin
+	gov, hp := &p.Points[p.Governing], &p.Points[p.GoverningHot]
+	for _, z := range []struct {
+		pt *planner.PointResult
+		e  *jet.Envelope
+	}{{gov, gov.Velocity()}, {hp, hp.Hot()}} {
+		if z.pt.Plume == nil || z.e.Length == 0 || len(z.e.Points) < 2 {
 			continue // the jet never exceeds this limit: no zone
 		}
-		g, ok := c.zoneOutline(fr, e)
 		unit := "m/s"
-		if e.Zone == jet.HotZone {
+		if z.e.Zone == jet.HotZone {
 			unit = "K"
 		}
-		c.add(layerZone, fmt.Sprintf("%s of %q", zoneName(e.Zone), gov.Name), g, ok, geojson.Properties{
-			"zone": zoneName(e.Zone), "point": gov.Name, "variant": e.Variant.String(),
-			"limit": sig(e.Limit), "limit_unit": unit,
-			"length_m": metres(e.Length), "max_radius_m": metres(e.MaxRadius),
+		props := func() geojson.Properties {
+			return geojson.Properties{
+				"zone": zoneName(z.e.Zone), "point": z.pt.Name, "variant": z.e.Variant.String(),
+				"limit": sig(z.e.Limit), "limit_unit": unit,
+				"length_m": metres(z.e.Length), "max_radius_m": metres(z.e.MaxRadius), "margin_m": metres(margin),
+			}
+		}
+		what := fmt.Sprintf("%s of %q", zoneName(z.e.Zone), z.pt.Name)
+		c.addCut(layerZone, what, planRing(fr, z.e.Points), &r.Cell, props())
+		if grown := jet.GrowOutline(z.e.Points, margin, marginSamples); grown != nil {
+			c.addCut(layerZoneMargin, what, planRing(fr, grown), &r.Cell, props())
+		}
+	}
+	if gov.Plume != nil && gov.CoreNominal > 0 {
+		core := [][2]float64{{0, 0}, {0, gov.Exit.Diameter / 2}, {gov.CoreNominal, 0}}
+		c.addCut(layerCore, fmt.Sprintf("of %q", gov.Name), planRing(fr, core), &r.Cell, geojson.Properties{
+			"point": gov.Name, "variant": jet.Nominal.String(), "length_m": metres(gov.CoreNominal),
 		})
 	}
+}
+
+// marginSamples is the number of axial steps of a margin band, as the sheet
+// draws it.
+const marginSamples = 240
+
+// addCut adds the plan polygon ring (cell frame, m), cut at the boundary of
+// a bounded cell: a Polygon, or a MultiPolygon when the boundary cuts it
+// apart; nothing when it lies wholly outside. The property "cut" says
+// whether the boundary cut it. Where the outlines only touch and cannot be
+// cut exactly, the uncut polygon is written with "cut" false.
+func (c *collection) addCut(layer, what string, ring orb.Ring, cell *geometry.Cell, props geojson.Properties) {
+	props["cut"] = false
+	if !cell.Bounded() {
+		g, ok := c.polygon(ring)
+		c.add(layer, what, g, ok, props)
+		return
+	}
+	parts, err := geometry.IntersectRings(ring, cell.Boundary)
+	if err != nil {
+		g, ok := c.polygon(ring)
+		c.add(layer, what, g, ok, props)
+		return
+	}
+	if len(parts) == 1 && math.Abs(planar.Area(parts[0])-math.Abs(planar.Area(ring))) <= 1e-9*math.Abs(planar.Area(ring)) {
+		g, ok := c.polygon(parts[0])
+		c.add(layer, what, g, ok, props)
+		return
+	}
+	props["cut"] = true
+	if len(parts) == 0 {
+		return
+	}
+	mp := make(orb.MultiPolygon, 0, len(parts))
+	good := true
+	for _, r := range parts {
+		g, ok := c.polygon(r)
+		good = good && ok
+		mp = append(mp, g)
+	}
+	if len(mp) == 1 {
+		c.add(layer, what, mp[0], good, props)
+		return
+	}
+	c.add(layer, what, mp, good, props)
+}
+
+// planRing returns the section of the body of revolution with the meridian
+// outline out ((x, r), m) in the horizontal plane through the jet axis, in
+// the cell frame: up the left side (azimuth 0) from the exit to the tip,
+// and back down the right side.
+func planRing(fr geometry.JetFrame, out [][2]float64) orb.Ring {
+	ring := make(orb.Ring, 0, 2*len(out)+1)
+	for _, q := range out {
+		ring = append(ring, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: q[1]})))
+	}
+	for i := len(out) - 1; i >= 0; i-- {
+		q := out[i]
+		ring = append(ring, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: q[1], Azimuth: math.Pi})))
+	}
+	return append(ring, ring[0])
 }
 
 // zoneName returns "velocity" or "hot".
@@ -152,22 +243,6 @@ func zoneName(z jet.Zone) string {
 		return "hot"
 	}
 	return "velocity"
-}
-
-// zoneOutline returns the envelope's outline (x, ±r) in the horizontal plane
-// through the jet axis, in the cell frame: up the left side (r > 0) from the
-// exit to the tip, and back down the right side.
-func (c *collection) zoneOutline(fr geometry.JetFrame, e *jet.Envelope) (orb.Polygon, bool) {
-	n := len(e.Points)
-	pts := make([]orb.Point, 0, 2*n)
-	for _, q := range e.Points {
-		pts = append(pts, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: q[1]})))
-	}
-	for i := n - 1; i >= 0; i-- {
-		q := e.Points[i]
-		pts = append(pts, vec2(fr.ToCell(geometry.JetPoint{X: q[0], R: -q[1]})))
-	}
-	return c.polygon(pts)
 }
 
 // addArcs adds, for each arc array with two or more stations, a line through

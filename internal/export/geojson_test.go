@@ -57,7 +57,7 @@ func TestGeoJSONLayers(t *testing.T) {
 		t.Errorf("polar_angle_convention: got %v, want from_inlet", got)
 	}
 	zones := 0
-	for _, e := range []float64{p.Points[p.Governing].Velocity().Length, p.Points[p.Governing].Hot().Length} {
+	for _, e := range []float64{p.Points[p.Governing].Velocity().Length, p.Points[p.GoverningHot].Hot().Length} {
 		if e > 0 {
 			zones++
 		}
@@ -76,6 +76,8 @@ func TestGeoJSONLayers(t *testing.T) {
 		{"nozzle", 1, "Point"},
 		{"jet_axis", 1, "LineString"},
 		{"zone", zones, "Polygon"},
+		{"zone_margin", zones, "Polygon"},
+		{"core", 1, "Polygon"},
 		{"arc", 1, "LineString"},
 		{"station", len(p.Stations), "Point"},
 		{"stand_base", 4, "Point"}, // the three boom stands and the probe mast; not the flush microphone
@@ -93,7 +95,7 @@ func TestGeoJSONLayers(t *testing.T) {
 		})
 	}
 	if zones != 2 {
-		t.Errorf("the fixture's governing point has %d zones, want 2 (velocity and hot)", zones)
+		t.Errorf("the fixture's governing points have %d zones, want 2 (velocity and hot)", zones)
 	}
 }
 
@@ -120,10 +122,11 @@ func TestGeoJSONPolygons(t *testing.T) {
 			}
 		}
 	}
-	gov := &p.Points[p.Governing]
 	for _, f := range layers["zone"] {
+		gov := &p.Points[p.Governing]
 		env := gov.Velocity()
 		if f.Properties["zone"] == "hot" {
+			gov = &p.Points[p.GoverningHot]
 			env = gov.Hot()
 		}
 		if got := f.Properties["point"]; got != gov.Name {

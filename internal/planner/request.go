@@ -124,6 +124,10 @@ func DefaultLimits() Limits {
 	}
 }
 
+// WithDefaults returns l with its zero fields set to their defaults: the
+// limits the planner checks against.
+func (l Limits) WithDefaults() Limits { return l.withDefaults() }
+
 // withDefaults fills zero fields with their defaults.
 func (l Limits) withDefaults() Limits {
 	d := DefaultLimits()
