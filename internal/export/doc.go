@@ -25,8 +25,8 @@
 // [JSON] writes one indented object: the format name and version, the
 // source file, the title and title block, the polar-angle convention, the
 // governing operating point (null without points), the counts of stations
-// by verdict and the plan's warnings, then "stations", "arrays", "points"
-// and "absorption" lists, in plan order. Keys are written in a fixed order
+// by verdict and the plan's warnings, then "stations", "arrays", "points",
+// "absorption" and "crew" lists, in plan order. Keys are written in a fixed order
 // (structs, not maps); an empty list is [], never null.
 //
 // A station gives its microphone (x_m, y_m, z_m), the foot of its stand
@@ -40,7 +40,14 @@
 // source region is in view (the check's value is 1) and buoyant_plume when
 // the check's value is 1. "check_details" lists every check with its
 // value, unit, verdict, governing point and reason, and "reasons" the
-// reasons of the checks that are not ok.
+// reasons of the checks that are not ok. "levels" gives the predicted
+// levels at the microphone, one {point, oaspl_db, a_weighted_db, peak_db}
+// per operating point (empty for probe stands); checks.oaspl_db is the
+// loudest.
+//
+// A crew entry, one per crew position and operating point, gives name,
+// point, a_weighted_db, peak_db (the C-weighted peak estimate),
+// allowed_hours (NIOSH REL) and status (ok, warn, blocked).
 //
 // An array gives its kind, radius, centre, whether the planner chose the
 // radius, the largest radius (arcs only, else null), the clearest polar
