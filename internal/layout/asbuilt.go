@@ -111,7 +111,8 @@ func (d *decoder) asBuilt(data []byte, ceiling float64) map[string]planner.Place
 		}
 		return nil
 	}
-	col, unit, ok := d.asBuiltHeader(header)
+	headerLine, _ := r.FieldPos(0) // after any comment lines
+	col, unit, ok := d.asBuiltHeader(header, headerLine)
 	if !ok {
 		return nil
 	}
@@ -258,7 +259,7 @@ func (d *decoder) asBuiltHeight(at func(c string) *yaml.Node, length func(*yaml.
 
 // asBuiltHeader maps the column names of the header row to their index,
 // and the length columns with a unit suffix (x_m, x_ft) to their unit.
-func (d *decoder) asBuiltHeader(header []string) (col map[string]int, unit map[string]string, ok bool) {
+func (d *decoder) asBuiltHeader(header []string, line int) (col map[string]int, unit map[string]string, ok bool) {
 	col, unit, ok = map[string]int{}, map[string]string{}, true
 	for i, h := range header {
 		h = strings.ToLower(strings.TrimSpace(h))
@@ -272,10 +273,10 @@ func (d *decoder) asBuiltHeader(header []string) (col map[string]int, unit map[s
 		case contains(exportOnly, h):
 			continue
 		case !contains(asBuiltColumns, h):
-			d.add(ErrUnknownKey, nil, 1, h, strings.Replace(unknownKeyMsg(h, "an as-built file", asBuiltColumns), "unknown key", "unknown column", 1))
+			d.add(ErrUnknownKey, nil, line, h, strings.Replace(unknownKeyMsg(h, "an as-built file", asBuiltColumns), "unknown key", "unknown column", 1))
 			ok = false
 		case has(col, h):
-			d.errorf(ErrSyntax, 1, h, "column %q is given twice", h)
+			d.errorf(ErrSyntax, line, h, "column %q is given twice", h)
 			ok = false
 		default:
 			col[h] = i
@@ -286,16 +287,16 @@ func (d *decoder) asBuiltHeader(header []string) (col map[string]int, unit map[s
 	}
 	for _, c := range asBuiltRequired {
 		if !has(col, c) {
-			d.errorf(ErrMissing, 1, c, "missing column; want id, x, y, z and optionally base_x, base_y")
+			d.errorf(ErrMissing, line, c, "missing column; want id, x, y, z and optionally base_x, base_y")
 			ok = false
 		}
 	}
 	if !has(col, "z") && !has(col, "height") {
-		d.errorf(ErrMissing, 1, "z", "missing column; want id, x, y, z and optionally base_x, base_y")
+		d.errorf(ErrMissing, line, "z", "missing column; want id, x, y, z and optionally base_x, base_y")
 		ok = false
 	}
 	if has(col, "base_x") != has(col, "base_y") {
-		d.errorf(ErrMissing, 1, "base_y", "give both base_x and base_y, or neither")
+		d.errorf(ErrMissing, line, "base_y", "give both base_x and base_y, or neither")
 		ok = false
 	}
 	return col, unit, ok

@@ -159,3 +159,14 @@ func TestUnknownAsBuilt(t *testing.T) {
 		t.Errorf("no stations: got nil, want every ID reported")
 	}
 }
+
+// TestAsBuiltHeaderLine checks that a problem of the header row is
+// reported at the header's line, after any comment lines (issue 10, item 8:
+// every problem has a line).
+func TestAsBuiltHeaderLine(t *testing.T) {
+	_, err := DecodeAsBuilt("built.csv", []byte("# measured 2026-11-30\n# by A. Tester\nid,x,y\nA-01,1,2\n"), "m", 4)
+	var es Errors
+	if !errors.As(err, &es) || es[0].Line != 3 || es[0].Field != "z" {
+		t.Errorf("got %v, want the missing z column at line 3", err)
+	}
+}
