@@ -88,7 +88,7 @@ func (v *planView) placeNoiseLabels(ls []noiseLabel) {
 func (b *builder) levelTable() tableSpec {
 	t := tableSpec{
 		name:  "levels",
-		title: "PREDICTED LEVELS AT THE MICROPHONES — OASPL, A-weighted level and C-weighted peak estimate per operating point; the microphone check of the loudest. " + noiseCaution,
+		title: "PREDICTED LEVELS AT THE MICROPHONES — OASPL, A-weighted level and C-weighted peak estimate (the C-weighted level plus a crest factor of 12 dB for subsonic shock-free jets, 15 dB otherwise) per operating point; the microphone check of the loudest (level plus a 15 dB crest allowance against the microphone's limit). " + noiseCaution,
 		heads: []string{"ID"},
 	}
 	for _, p := range b.plan.Points {
