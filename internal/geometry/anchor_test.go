@@ -76,3 +76,22 @@ func TestAnchorValidate(t *testing.T) {
 		t.Errorf("a good anchor: %v", err)
 	}
 }
+
+// FuzzAnchorToWGS84: a valid anchor and a plan point within 100 km give a
+// finite longitude within ±180° and a latitude within ±90°.
+func FuzzAnchorToWGS84(f *testing.F) {
+	f.Add(0.0, 0.0, 0.0, 0.0, 0.0)
+	f.Add(89.0, 180.0, 359.0, 1e5, -1e5)
+	f.Add(-52.5, -179.99, -90.0, 500.0, 30.0)
+	f.Fuzz(func(t *testing.T, lat, lon, bearing, x, y float64) {
+		deg := math.Pi / 180
+		a := Anchor{Latitude: lat * deg, Longitude: lon * deg, BearingX: bearing * deg}
+		if a.Validate() != nil || math.Abs(bearing) > 1e6 || !(math.Abs(x) <= 1e5) || !(math.Abs(y) <= 1e5) {
+			return
+		}
+		gl, gt := a.ToWGS84(orb.Point{x, y})
+		if !(math.Abs(gl) <= 180) || !(math.Abs(gt) <= 90) {
+			t.Fatalf("%+v, (%g, %g): got (%g, %g)", a, x, y, gl, gt)
+		}
+	})
+}

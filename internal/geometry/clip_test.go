@@ -101,3 +101,29 @@ func TestPropertyIntersectArea(t *testing.T) {
 		}
 	}
 }
+
+// FuzzIntersectRings: for any two outlines that CheckRing accepts, the cut
+// gives closed counter-clockwise rings whose area is at most that of
+// either outline, and never panics on any input.
+func FuzzIntersectRings(f *testing.F) {
+	f.Add(encodeRing(unitSquare), encodeRing(lRoom))
+	f.Add(encodeRing(box(0, 0, 2, 2)), encodeRing(box(2, 0, 4, 2)))
+	f.Add(encodeRing(reversed(lRoom)), encodeRing(box(0.5, -1, 1.5, 3)))
+	f.Fuzz(func(t *testing.T, a, b []byte) {
+		s, c := decodeRing(a), decodeRing(b)
+		got, err := IntersectRings(s, c)
+		if CheckRing(s) != nil || CheckRing(c) != nil || err != nil {
+			return
+		}
+		area := ringsArea(got)
+		lim := math.Min(math.Abs(planar.Area(s)), math.Abs(planar.Area(c)))
+		if math.IsNaN(area) || area > lim*(1+1e-9)+1e-9 {
+			t.Fatalf("%v ∩ %v: area %g, more than the smaller outline's %g", s, c, area, lim)
+		}
+		for _, r := range got {
+			if len(r) < 4 || r[0] != r[len(r)-1] || r.Orientation() != orb.CCW {
+				t.Fatalf("%v ∩ %v: ring %v not closed and counter-clockwise", s, c, r)
+			}
+		}
+	})
+}

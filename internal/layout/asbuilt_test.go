@@ -163,6 +163,9 @@ func FuzzDecodeAsBuilt(f *testing.F) {
 		"id\tx\ty\tz\nA-01\t5.1\t7.2\t1.4\n",
 		"# comment; with, separators\nid;x_m;y_m;z_m;reasons\nA-01;1,5;2;0,5;a, b\n",
 		"id,x,y,z\nA-01,5\xe9,7,1\n",
+		"id,channel,x_m,y_m,z_m,height_m\nA-01,,5,7,1.5,1.6\nA-02,,5,7,,1.2\n",
+		"id,x,y,z,base_x,base_y\nA-01,,,,,\nA-02,,,,,\n",
+		"id,x_ft,y_ft,height_ft,base_x_ft,base_y_ft\nG-01,10,20,5,10,20\n",
 	} {
 		f.Add([]byte(s))
 	}
