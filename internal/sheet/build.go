@@ -46,11 +46,12 @@ type builder struct {
 	colW    float64
 	byArray map[string][]*planner.Station
 
-	gridStep  float64 // plan grid spacing, m
-	keyPlaced bool    // the label key is on sheet 1
-	zs        zoneSet // the zones drawn
-	ranges    string  // the first range label on the plan, "" if none
-	cropped   bool    // the plan shows the region of interest, not the whole cell
+	gridStep  float64  // plan grid spacing, m
+	keyPlaced bool     // the label key is on sheet 1
+	zs        zoneSet  // the zones drawn
+	ranges    string   // the first range label on the plan, "" if none
+	cropped   bool     // the plan shows the region of interest, not the whole cell
+	details   []detail // the detail views of dense arrays
 	// hazardsDrawn are the hazards marked on the plan
 	hazardsDrawn []hazard
 	noise        *planner.NoiseMap // the predicted noise contours; nil when noiseErr says why
@@ -208,6 +209,7 @@ func (b *builder) continuation() {
 	sys := b.req.Units
 	// the elevation and the clearance view share the horizontal scale
 	sx := 0
+	prevRight, rowTop, rowBottom := 0.0, f.y, f.y
 	for _, sv := range []struct {
 		title string
 		make  func(x, y, w, maxH float64, sx int) (*sideView, bool)
@@ -215,19 +217,41 @@ func (b *builder) continuation() {
 		{"ELEVATION — vertical section through the jet axis: x downstream of the nozzle exit, heights above the floor; the zones are cut at the floor, the ceiling and the walls", b.elevation},
 		{"CLEARANCE VIEW — the jet's meridional half-plane: x downstream of the exit, r the distance from the jet axis; each station at its true x and r, so it is clear of a zone exactly when its mark is outside the zone's outline", b.clearance},
 	} {
-		for _, l := range b.m.wrap(clean(sv.title), f.area.W, sizeHeading, true) {
-			f.page.Texts = append(f.page.Texts, Text{X: f.area.X, Y: f.y + capHeight(sizeHeading) + 0.5, Size: sizeHeading, Bold: true, Text: l})
-			f.y += lineHeight(sizeHeading)
+		// beside the previous view when that leaves a column of 120 mm,
+		// else below it
+		x, w := f.area.X, f.area.W
+		if prevRight > 0 && f.area.Right()-(prevRight+6) >= 120 {
+			x, w = prevRight+6, f.area.Right()-(prevRight+6)
+			f.y = rowTop
+		} else {
+			rowTop = f.y
 		}
-		f.y += 1.5
-		maxH := math.Min(f.area.H*0.48, f.area.Bottom()-f.y-lineHeight(sizeBody)-2)
-		v, ok := sv.make(f.area.X, f.y, f.area.W, maxH, sx)
-		if !ok && sx != 0 {
-			// at a scale of its own rather than not at all
-			v, ok = sv.make(f.area.X, f.y, f.area.W, maxH, 0)
+		var v *sideView
+		ok := false
+		for attempt := 0; attempt < 2; attempt++ {
+			y0 := f.y
+			// the title goes under the view, wrapped to its width
+			maxH := math.Min(f.area.H*0.48, f.area.Bottom()-f.y-3*lineHeight(sizeHeading)-lineHeight(sizeBody)-2)
+			v, ok = sv.make(x, f.y, w, maxH, sx)
+			if !ok && sx != 0 {
+				// at a scale of its own rather than not at all
+				v, ok = sv.make(x, f.y, w, maxH, 0)
+			}
+			if ok || (y0 == f.area.Y && x == f.area.X) {
+				break
+			}
+			// not enough room left here: start the view on the next sheet
+			if x == f.area.X {
+				f.newPage()
+			} else {
+				f.y = rowBottom
+			}
+			x, w, rowTop = f.area.X, f.area.W, f.y
 		}
 		caption := "Not drawn: it fits no standard scale on this paper."
+		tw := w
 		if ok {
+			tw = math.Max(v.frame.W, 60)
 			view := View{Name: v.name, Frame: v.frame, Scale: v.sx, Shapes: v.shapes}
 			if v.sy != v.sx {
 				view.VScale = v.sy
@@ -245,10 +269,19 @@ func (b *builder) continuation() {
 				b.model.ElevationScale = v.sx
 			}
 		}
+		f.y += 1
+		for _, l := range b.m.wrap(clean(sv.title), tw, sizeHeading, true) {
+			f.y += lineHeight(sizeHeading)
+			f.page.Texts = append(f.page.Texts, Text{X: x, Y: f.y - 0.8, Size: sizeHeading, Bold: true, Text: l})
+		}
 		f.y += lineHeight(sizeBody)
-		f.page.Texts = append(f.page.Texts, Text{X: f.area.X, Y: f.y, Size: sizeBody, Bold: true, Text: clean(caption)})
-		f.y += 3
+		f.page.Texts = append(f.page.Texts, Text{X: x, Y: f.y - 0.8, Size: sizeBody, Bold: true, Text: clean(caption)})
+		f.y += 4
+		prevRight = x + tw
+		rowBottom = math.Max(rowBottom, f.y)
+		f.y = rowBottom
 	}
+	f.details(b.details)
 	if len(b.model.Key) > 0 && !b.keyPlaced {
 		h := b.keyHeight(f.area.W)
 		f.ensure(h)

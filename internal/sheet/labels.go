@@ -34,7 +34,7 @@ func (v *planView) placeText(s string, kind LabelKind, of string, size float64, 
 	v.pl.commit(sp)
 	v.labels = append(v.labels, Label{
 		Text: s, Kind: kind, For: of, X: sp.box.X, Y: sp.box.Y, W: sp.box.W, H: sp.box.H,
-		Size: size, Anchor: anchor, Leader: sp.leader, Line: leaderLine(sp), View: "plan",
+		Size: size, Anchor: anchor, Leader: sp.leader, Line: leaderLine(sp), View: v.viewName(),
 	})
 	return true
 }

@@ -185,3 +185,53 @@ func TestReasonsWrapInTheirCell(t *testing.T) {
 	}
 	t.Fatal("no row for A-01")
 }
+
+// TestDetailViews: an array too dense to label at the plan's scale gets a
+// detail view at a larger standard scale, outlined and lettered on the
+// plan, in which its stations carry their IDs (issue 9 item 4: the
+// near-field line's 7 stations 3 mm apart had no enlarged detail).
+func TestDetailViews(t *testing.T) {
+	p := padPlan(t, 500)
+	m := build(t, p, sheet.Options{})
+	outlined, lettered := false, false
+	for _, sh := range m.Pages[0].Views[0].Shapes {
+		outlined = outlined || sh.Style == sheet.StyleDetail
+	}
+	for _, l := range m.Pages[0].Labels {
+		lettered = lettered || strings.HasPrefix(l.Text, "DETAIL ")
+	}
+	if !outlined || !lettered {
+		t.Fatalf("got outline %v and letter %v on the plan, want both", outlined, lettered)
+	}
+	ids := map[string]string{} // station ID → the detail that labels it
+	details := 0
+	for _, pg := range m.Pages[1:] {
+		for _, v := range pg.Views {
+			if !strings.HasPrefix(v.Name, "detail ") {
+				continue
+			}
+			details++
+			if v.Scale >= m.Scale {
+				t.Errorf("%s at 1:%d, not larger than the plan's 1:%d", v.Name, v.Scale, m.Scale)
+			}
+		}
+		for _, l := range pg.Labels {
+			if strings.HasPrefix(l.View, "detail ") && l.Kind == sheet.StationLabel {
+				ids[l.Text] = l.View
+			}
+		}
+	}
+	if details == 0 {
+		t.Fatal("no detail view after sheet 1")
+	}
+	// the unlabelled stations of the plan are mostly named in a detail
+	named := 0
+	for _, id := range m.Unlabelled {
+		if ids[id] != "" {
+			named++
+		}
+	}
+	if len(m.Unlabelled) > 0 && named < len(m.Unlabelled)/2 {
+		t.Errorf("%d of %d stations without a label on the plan are named in a detail, want most", named, len(m.Unlabelled))
+	}
+}

@@ -32,6 +32,17 @@ type planView struct {
 	// every other callout
 	hazardLabels []callout
 	datumOut     bool // the datum lies outside the frame and is not drawn
+	// name is the view's name, "" for the plan; scale its denominator
+	name  string
+	scale int
+}
+
+// viewName returns the name of the view the labels belong to.
+func (v *planView) viewName() string {
+	if v.name == "" {
+		return "plan"
+	}
+	return v.name
 }
 
 // planExtent returns the cell-frame rectangle the plan must show, m: the
@@ -98,7 +109,7 @@ func (b *builder) planPage(asked int, field string) error {
 		b: b, frame: vf,
 		t:   newTransform(scale, cx, cy, Pt{inner.X + inner.W/2, inner.Y + inner.H/2}),
 		pl:  newPlacer(vf.inset(0.8)),
-		pos: make(map[*planner.Station]Pt),
+		pos: make(map[*planner.Station]Pt), scale: scale,
 	}
 	z := b.zs
 	v.grid()
@@ -117,6 +128,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.hazardMarks()
 	v.placeLabels(z)
 	v.placeNoiseLabels(noise)
+	b.details = v.findDetails()
 
 	b.model.Pages = append(b.model.Pages, Page{})
 	pg := &b.model.Pages[0]
@@ -132,7 +144,7 @@ func (b *builder) planPage(asked int, field string) error {
 // left and bottom edges of the frame in the layout's units.
 func (v *planView) grid() {
 	b := v.b
-	g := gridSpacing(b.model.Scale, b.req.Units, 18)
+	g := gridSpacing(v.scale, b.req.Units, 18)
 	u := unitLen(b.req.Units)
 	x0, y0 := v.t.world(Pt{v.frame.X, v.frame.Bottom()})
 	x1, y1 := v.t.world(Pt{v.frame.Right(), v.frame.Y})
@@ -148,7 +160,7 @@ func (v *planView) grid() {
 		}
 		r := Rect{p.X - w/2 - 0.3, v.frame.Bottom() - 1.2 - capH - 0.4, w + 0.6, capH + 0.8}
 		v.pl.block(r)
-		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid X", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{p.X, v.frame.Bottom()}, View: "plan"})
+		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid X", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{p.X, v.frame.Bottom()}, View: v.viewName()})
 	}
 	for j := math.Ceil(y0 / g); j*g <= y1; j++ {
 		p := v.t.pt(0, j*g)
@@ -160,7 +172,7 @@ func (v *planView) grid() {
 		}
 		r := Rect{v.frame.X + 0.8, p.Y - capH/2 - 0.4, w + 0.6, capH + 0.8}
 		v.pl.block(r)
-		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid Y", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{v.frame.X, p.Y}, View: "plan"})
+		v.labels = append(v.labels, Label{Text: s, Kind: FeatureLabel, For: "grid Y", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: Pt{v.frame.X, p.Y}, View: v.viewName()})
 	}
 	// axis names at the ends of the labelled edges
 	for _, a := range []struct {
@@ -178,10 +190,12 @@ func (v *planView) grid() {
 		r := Rect{x, a.p.Y, w + 0.6, capH + 0.8}
 		if v.pl.free(r) {
 			v.pl.take(r)
-			v.labels = append(v.labels, Label{Text: a.s, Kind: FeatureLabel, For: "grid axis", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: a.p, View: "plan"})
+			v.labels = append(v.labels, Label{Text: a.s, Kind: FeatureLabel, For: "grid axis", X: r.X, Y: r.Y, W: r.W, H: r.H, Size: sz, Anchor: a.p, View: v.viewName()})
 		}
 	}
-	b.gridStep = g
+	if v.name == "" {
+		b.gridStep = g
+	}
 }
 
 // ringPts returns the page points of a world ring.

@@ -16,6 +16,7 @@ const (
 	StyleSignal     Style = "signal"        // the signal-word band of the safety panel: safety orange fill
 	StyleSignalMark Style = "signal.mark"   // the exclamation mark inside the safety alert symbol: safety orange fill
 	StyleHazard     Style = "hazard"        // the warning triangle where a zone meets a surface: safety orange, black outline
+	StyleDetail     Style = "detail"        // the outline of a detail view on the plan: long dash and two dots
 	StyleGrid       Style = "grid"          // the light coordinate grid
 	StyleBoundary   Style = "boundary"      // the cell boundary, thick
 	StyleTreatment  Style = "treatment"     // the treatment behind the boundary: thin, light hatching at −45°
@@ -105,6 +106,7 @@ var styles = map[Style]StyleDef{
 	StyleSignal:     {Fill: fill(safetyOrange)},
 	StyleSignalMark: {Fill: fill(safetyOrange)},
 	StyleHazard:     {Pen: Pen{Width: 0.25, Color: black}, Fill: fill(safetyOrange)},
+	StyleDetail:     {Pen: Pen{Width: 0.3, Dash: []float64{5, 0.8, 0.5, 0.8, 0.5, 0.8}, Color: black}},
 	StyleGrid:       {Pen: Pen{Width: 0.1, Color: gridGrey}},
 	StyleBoundary:   {Pen: Pen{Width: 0.7, Color: black}},
 	StyleTreatment:  {Pen: Pen{Width: 0.15, Color: midGrey}, Hatches: []Hatch{{Angle: -45, Spacing: 0.9, Pen: Pen{Width: 0.08, Color: midGrey}}}},

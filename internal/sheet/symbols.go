@@ -37,7 +37,7 @@ func (v *planView) datum() {
 		w := v.b.m.width(a.s, sz, true)
 		box := Rect{a.at.X - 0.2, a.at.Y - capHeight(sz) - 0.4, w + 0.4, capHeight(sz) + 0.8}
 		v.pl.block(box)
-		v.labels = append(v.labels, Label{Text: a.s, Kind: FeatureLabel, For: "datum axis", X: box.X, Y: box.Y, W: box.W, H: box.H, Size: sz, Anchor: p, View: "plan"})
+		v.labels = append(v.labels, Label{Text: a.s, Kind: FeatureLabel, For: "datum axis", X: box.X, Y: box.Y, W: box.W, H: box.H, Size: sz, Anchor: p, View: v.viewName()})
 	}
 }
 

@@ -78,6 +78,9 @@ type meter struct {
 	size  float64
 	bold  bool
 	cache map[glyphKey]float64
+	// tables hold the widths of the first 256 characters by size and
+	// weight (glyphKey with r 0)
+	tables map[glyphKey]*[256]float64
 }
 
 // glyphKey is a character at a size (pt) and weight.
@@ -89,7 +92,7 @@ type glyphKey struct {
 
 func newMeter() *meter {
 	pdf := gofpdf.New("L", "mm", "A4", "")
-	m := &meter{pdf: pdf, tr: pdf.UnicodeTranslatorFromDescriptor(""), cache: make(map[glyphKey]float64)}
+	m := &meter{pdf: pdf, tr: pdf.UnicodeTranslatorFromDescriptor(""), cache: make(map[glyphKey]float64), tables: make(map[glyphKey]*[256]float64)}
 	m.set(8, false)
 	return m
 }
@@ -118,11 +121,31 @@ func (m *meter) runeWidth(r rune, size float64, bold bool) float64 {
 	return w
 }
 
+// latin returns the widths of the characters below U+0100 at size (pt)
+// and weight, measured once.
+func (m *meter) latin(size float64, bold bool) *[256]float64 {
+	k := glyphKey{size: size, bold: bold}
+	if t, ok := m.tables[k]; ok {
+		return t
+	}
+	t := new([256]float64)
+	for r := range t {
+		t[r] = m.runeWidth(rune(r), size, bold)
+	}
+	m.tables[k] = t
+	return t
+}
+
 // width returns the printed width of s at size (pt), mm.
 func (m *meter) width(s string, size float64, bold bool) float64 {
+	t := m.latin(size, bold)
 	w := 0.0
 	for _, r := range s {
-		w += m.runeWidth(r, size, bold)
+		if r < 256 {
+			w += t[r]
+		} else {
+			w += m.runeWidth(r, size, bold)
+		}
 	}
 	return w
 }
