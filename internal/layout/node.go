@@ -8,6 +8,7 @@ import (
 	"regexp"
 	"strconv"
 	"strings"
+	"unicode"
 
 	"go.yaml.in/yaml/v3"
 
@@ -234,6 +235,9 @@ func (s *section) has(key string) bool { return s.vals[key] != nil }
 
 // field returns the path of key inside the section.
 func (s *section) field(key string) string {
+	if strings.IndexFunc(key, func(r rune) bool { return !unicode.IsPrint(r) }) >= 0 {
+		key = strconv.QuoteToASCII(key) // a key such as "\e[2J" must not reach the terminal raw
+	}
 	if s.path == "" {
 		return key
 	}

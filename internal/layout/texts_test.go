@@ -69,3 +69,18 @@ func TestAngleShortfallBelowResolution(t *testing.T) {
 		t.Errorf("got %v, want a warning that the steps stop at 175.0°", warns)
 	}
 }
+
+// TestKeyWithControlCharacters checks that an unknown key written with
+// escapes ("\e[2J") is quoted in the message, so that it cannot drive the
+// terminal (issue 10, item 9).
+func TestKeyWithControlCharacters(t *testing.T) {
+	es := decodeErrors(t, baseLayout+"\"\\e[2Jx\": 1\n")
+	for _, e := range es {
+		if strings.ContainsRune(e.Error(), 0x1b) {
+			t.Errorf("got %q, want no raw escape character", e)
+		}
+	}
+	if !strings.Contains(es.Error(), `"\x1b[2Jx"`) {
+		t.Errorf("got %v, want the key quoted", es)
+	}
+}
