@@ -55,6 +55,13 @@ func TestEndpoints(t *testing.T) {
 					t.Errorf("body refers to %q: the page must need no network", bad)
 				}
 			}
+			// the plan's outputs say which version they are, so that the
+			// page can tell a set fetched across a save
+			if strings.Contains(tc.path, ".") && !strings.HasSuffix(tc.path, ".js") && !strings.HasSuffix(tc.path, ".css") {
+				if v := res.Header.Get(preview.VersionHeader); v != "1" {
+					t.Errorf("got %s %q, want 1", preview.VersionHeader, v)
+				}
+			}
 			if csp := res.Header.Get("Content-Security-Policy"); !strings.Contains(csp, "default-src 'none'") {
 				t.Errorf("got Content-Security-Policy %q, want one that loads nothing from elsewhere", csp)
 			}

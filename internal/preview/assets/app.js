@@ -65,6 +65,9 @@
 
   async function loadOnce() {
     const [sr, jr, vr] = await Promise.all([fetch("/status.json"), fetch("/plan.json"), fetch("/plan.svg")]);
+    // a save between the three answers: ask again for a matching set
+    const versions = new Set([sr, jr, vr].map((r) => r.headers.get("X-Arcwright-Version")));
+    if (versions.size > 1) again = true;
     status = await sr.json();
     $("file").textContent = status.file;
     document.title = "arcwright live plan — " + status.file;
