@@ -28,3 +28,27 @@ func BenchmarkPlanDemo(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkNoiseMapDemo computes the noise contours of each demo, the cost
+// the sheet and the GeoJSON add to a plan.
+func BenchmarkNoiseMapDemo(b *testing.B) {
+	paths, _ := filepath.Glob("../../layouts/*.yaml")
+	for _, path := range paths {
+		req, _, err := layout.Load(path)
+		if err != nil {
+			b.Fatal(err)
+		}
+		p, err := planner.New(req)
+		if err != nil {
+			b.Fatal(err)
+		}
+		b.Run(filepath.Base(path), func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := p.NoiseMap(); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

@@ -21,7 +21,7 @@ const (
 
 // noiseMapNodes is the number of grid nodes along the longer side of the
 // noise map (a project choice: fine enough for a sheet, cheap to compute).
-const noiseMapNodes = 81
+const noiseMapNodes = 61
 
 // NoiseContour is one level's contour on the plan.
 type NoiseContour struct {
