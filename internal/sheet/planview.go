@@ -225,6 +225,9 @@ func (v *planView) cell() {
 			v.shapes = append(v.shapes, poly(StyleTreatment, outer, inner))
 		}
 		v.shapes = append(v.shapes, poly(StyleBoundary, inner))
+		if v.name == "" && v.b.cropped {
+			v.breakMarks(inner)
+		}
 	}
 	for _, k := range c.KeepOuts {
 		v.shapes = append(v.shapes, poly(StyleKeepOut, v.ringPts(orbPts(k.Footprint.Outline(48)))))
@@ -232,6 +235,47 @@ func (v *planView) cell() {
 	for _, o := range c.Obstacles {
 		pts := v.ringPts(orbPts(o.Footprint.Outline(48)))
 		v.shapes = append(v.shapes, poly(StyleObstacle, pts))
+	}
+}
+
+// breakMarks draws a break mark (a short zigzag across the line) where the
+// boundary ring leaves the frame of a cropped plan, 3 mm inside it, and
+// says so in the notes.
+func (v *planView) breakMarks(ring []Pt) {
+	f := v.frame
+	n := 0
+	for i := range ring {
+		a, c := ring[i], ring[(i+1)%len(ring)]
+		ain := a.X >= f.X && a.X <= f.Right() && a.Y >= f.Y && a.Y <= f.Bottom()
+		cin := c.X >= f.X && c.X <= f.Right() && c.Y >= f.Y && c.Y <= f.Bottom()
+		if ain == cin {
+			continue
+		}
+		in, out := a, c
+		if cin {
+			in, out = c, a
+		}
+		// the crossing, by bisection between the inside and outside ends
+		lo, hi := in, out
+		for k := 0; k < 40; k++ {
+			m := lerp(lo, hi, 0.5)
+			if m.X >= f.X && m.X <= f.Right() && m.Y >= f.Y && m.Y <= f.Bottom() {
+				lo = m
+			} else {
+				hi = m
+			}
+		}
+		d := unit(sub(out, in), Pt{1, 0})
+		if length(sub(lo, in)) < 4 {
+			continue
+		}
+		p := sub(lo, mul(d, 3))
+		nn := perp(d)
+		v.shapes = append(v.shapes, line(StyleBoundary, add(sub(p, mul(d, 1.2)), mul(nn, 1.6)), add(p, mul(nn, 1.2)), sub(p, mul(nn, 1.2)), sub(add(p, mul(d, 1.2)), mul(nn, 1.6))))
+		n++
+	}
+	if n > 0 {
+		v.notes = append(v.notes, "The plan is cropped to the stations, zones and nozzle: the boundary runs on past the break marks at the frame.")
 	}
 }
 
