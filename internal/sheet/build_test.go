@@ -11,6 +11,9 @@ import (
 	"testing"
 	"time"
 
+	"github.com/paulmach/orb"
+
+	"arcwright/internal/geometry"
 	"arcwright/internal/planner"
 	"arcwright/internal/sheet"
 )
@@ -399,5 +402,37 @@ func renameArray(p *planner.Plan, n string) {
 		if p.Stations[i].Array == old {
 			p.Stations[i].Array = n
 		}
+	}
+}
+
+// TestLargeSiteCropped: an outdoor site far larger than its stations is
+// drawn cropped to them at a larger scale, with break marks where the site
+// limit leaves the frame and a note saying so (issue 9 item 3: a large
+// site was refused, or drawn as a speck).
+func TestLargeSiteCropped(t *testing.T) {
+	p := chamberPlan(t)
+	c := &p.Request.Cell
+	c.Kind = geometry.OutdoorPad
+	c.Ceiling, c.TreatmentDepth = math.Inf(1), 0
+	// the site's upstream edge 8 m behind the datum crosses the frame
+	c.Boundary = orb.Ring{{-8, -150}, {400, -150}, {400, 250}, {-8, 250}, {-8, -150}}
+	c.Collector = nil
+	m := build(t, p, sheet.Options{})
+	// the whole site fits A3 at 1:2000 (408 × 400 m is 204 × 200 mm,
+	// hand-computed), where the 12 m of stations would fill 6 mm
+	if m.Scale > 200 {
+		t.Errorf("got 1:%d, want the stations' region drawn at 1:200 or larger", m.Scale)
+	}
+	breaks := 0
+	for _, sh := range m.Pages[0].Views[0].Shapes {
+		if sh.Style == sheet.StyleBoundary && sh.Kind == sheet.Polyline && len(sh.Points) == 4 {
+			breaks++
+		}
+	}
+	if breaks == 0 {
+		t.Error("no break marks where the site limit leaves the frame")
+	}
+	if !strings.Contains(flowText(m), "cropped to the stations") {
+		t.Error("the sheet does not say the plan is cropped")
 	}
 }

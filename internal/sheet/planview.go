@@ -239,44 +239,46 @@ func (v *planView) cell() {
 }
 
 // breakMarks draws a break mark (a short zigzag across the line) where the
-// boundary ring leaves the frame of a cropped plan, 3 mm inside it, and
-// says so in the notes.
+// boundary ring crosses the frame of a cropped plan, 3 mm inside it, and
+// says in the notes that the plan is cropped.
 func (v *planView) breakMarks(ring []Pt) {
 	f := v.frame
-	n := 0
 	for i := range ring {
 		a, c := ring[i], ring[(i+1)%len(ring)]
-		ain := a.X >= f.X && a.X <= f.Right() && a.Y >= f.Y && a.Y <= f.Bottom()
-		cin := c.X >= f.X && c.X <= f.Right() && c.Y >= f.Y && c.Y <= f.Bottom()
-		if ain == cin {
-			continue
-		}
-		in, out := a, c
-		if cin {
-			in, out = c, a
-		}
-		// the crossing, by bisection between the inside and outside ends
-		lo, hi := in, out
-		for k := 0; k < 40; k++ {
-			m := lerp(lo, hi, 0.5)
-			if m.X >= f.X && m.X <= f.Right() && m.Y >= f.Y && m.Y <= f.Bottom() {
-				lo = m
+		// Liang–Barsky: the part of a→c inside the frame is t0…t1
+		d := sub(c, a)
+		t0, t1 := 0.0, 1.0
+		ok := true
+		for _, e := range [][2]float64{{-d.X, a.X - f.X}, {d.X, f.Right() - a.X}, {-d.Y, a.Y - f.Y}, {d.Y, f.Bottom() - a.Y}} {
+			p, q := e[0], e[1]
+			if p == 0 {
+				ok = ok && q >= 0
+				continue
+			}
+			r := q / p
+			if p < 0 {
+				t0 = math.Max(t0, r)
 			} else {
-				hi = m
+				t1 = math.Min(t1, r)
 			}
 		}
-		d := unit(sub(out, in), Pt{1, 0})
-		if length(sub(lo, in)) < 4 {
+		if !ok || t0 >= t1 {
 			continue
 		}
-		p := sub(lo, mul(d, 3))
-		nn := perp(d)
-		v.shapes = append(v.shapes, line(StyleBoundary, add(sub(p, mul(d, 1.2)), mul(nn, 1.6)), add(p, mul(nn, 1.2)), sub(p, mul(nn, 1.2)), sub(add(p, mul(d, 1.2)), mul(nn, 1.6))))
-		n++
+		u := unit(d, Pt{1, 0})
+		n := perp(u)
+		mark := func(at Pt, inward Pt) {
+			p := add(at, mul(inward, 3))
+			v.shapes = append(v.shapes, line(StyleBoundary, add(sub(p, mul(u, 1.2)), mul(n, 1.6)), add(p, mul(n, 1.2)), sub(p, mul(n, 1.2)), sub(add(p, mul(u, 1.2)), mul(n, 1.6))))
+		}
+		if t0 > 0 {
+			mark(add(a, mul(d, t0)), u)
+		}
+		if t1 < 1 {
+			mark(add(a, mul(d, t1)), mul(u, -1))
+		}
 	}
-	if n > 0 {
-		v.notes = append(v.notes, "The plan is cropped to the stations, zones and nozzle: the boundary runs on past the break marks at the frame.")
-	}
+	v.notes = append(v.notes, "The plan is cropped to the stations, zones and nozzle: the boundary runs on past the break marks at the frame, or lies wholly outside it.")
 }
 
 // drawZones draws the margin bands, the velocity and hot zones and the
