@@ -210,10 +210,16 @@ func (ix *Index) segmentHits(dst []int, a, b r3.Vec, n, skip int) []int {
 			yl, yr := a.Y+tl*(b.Y-a.Y), a.Y+tr*(b.Y-a.Y)
 			ylo, yhi = math.Min(yl, yr)-indexPad, math.Max(yl, yr)+indexPad
 		}
+		if yhi < ix.grid.Min[1] || ylo > ix.grid.Max[1] {
+			continue // the segment passes above or below the grid here
+		}
+		// the piece of the segment over this column: a solid whose bound
+		// misses it cannot be hit here
+		piece := orb.Bound{Min: orb.Point{xl - indexPad, ylo}, Max: orb.Point{xr + indexPad, yhi}}
 		for r := ix.row(ylo); r <= ix.row(yhi); r++ {
 			for _, id := range ix.cellItems(c, r) {
 				i := int(id)
-				if i == skip || !ix.bounds[i].Intersects(seg) || slices.Contains(missed[:nmissed], id) || reported.has(id) {
+				if i == skip || !ix.bounds[i].Intersects(piece) || slices.Contains(missed[:nmissed], id) || reported.has(id) {
 					continue
 				}
 				if !ix.solids[i].segmentHits(a, b, ix.bounds[i]) {
