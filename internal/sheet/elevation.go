@@ -252,6 +252,7 @@ func (v *sideView) zones(z0 float64, upper bool, clip []Pt) {
 	if z.hot != nil {
 		v.zone(StyleHot, ring(z.hot), clip)
 	}
+	v.carried(z0, upper, clip)
 	if z.core > 0 {
 		v.zone(StyleCore, ring(zoneOutline{{0, 0}, {0, z.exitR}, {z.core, 0}}), clip)
 	}

@@ -308,6 +308,7 @@ func (v *planView) drawZones(z zoneSet) {
 	if z.hot != nil {
 		zone(StyleHot, z.hot)
 	}
+	v.drawCarried(z, clip)
 	if z.core > 0 {
 		core := zoneOutline{{0, 0}, {0, z.exitR}, {z.core, 0}}
 		v.shapes = append(v.shapes, poly(StyleCore, v.ringPts(planRing(fr, core))))

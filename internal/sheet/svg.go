@@ -311,6 +311,7 @@ func (b *builder) pointZones(pt *planner.PointResult) zoneSet {
 		vel: envelopeOutline(vel), hot: envelopeOutline(hot),
 		core: pt.CoreNominal, exitR: pt.Exit.Diameter / 2,
 		velLen: vel.Length, hotLen: hot.Length, hotPoint: pt.Name,
+		velPt: pt, hotPt: pt,
 	}
 	z.velM = marginOutline(z.vel, b.lim.Margin, 240)
 	z.hotM = marginOutline(z.hot, b.lim.Margin, 240)

@@ -5,6 +5,7 @@ import (
 
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
+	"arcwright/internal/planner"
 )
 
 // zoneOutline is a zone's meridian outline in the jet frame, (x, r) in m,
@@ -64,6 +65,9 @@ type zoneSet struct {
 	exitR          float64     // exit radius, m
 	velLen, hotLen float64     // axial reach of the zones, m
 	hotPoint       string      // the operating point whose hot zone is drawn
+	// velPt and hotPt are the points whose velocity and hot zones are
+	// drawn (their bent and attached zones too)
+	velPt, hotPt *planner.PointResult
 }
 
 // zones returns what the sheet draws of the plume: the governing point's
@@ -80,6 +84,7 @@ func (b *builder) zones() zoneSet {
 		vel: envelopeOutline(vel), hot: envelopeOutline(hot),
 		core: g.CoreNominal, exitR: g.Exit.Diameter / 2,
 		velLen: vel.Length, hotLen: hot.Length, hotPoint: hp.Name,
+		velPt: g, hotPt: hp,
 	}
 	z.velM = marginOutline(z.vel, b.lim.Margin, 240)
 	z.hotM = marginOutline(z.hot, b.lim.Margin, 240)
