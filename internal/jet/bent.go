@@ -34,12 +34,17 @@ import (
 // model's tail factor.
 
 const (
-	// bentAlpha is the top-hat entrainment coefficient (see above).
-	bentAlpha = 0.08
+	// bentAlpha is the top-hat entrainment coefficient of the path and of
+	// the centreline values (see above); bentAlphaPlume, the plume value,
+	// sets the width of the zones about the path (the wide end).
+	bentAlpha      = 0.08
+	bentAlphaPlume = 0.12
 	// BentTrajectoryScatter is the relative scatter of the rise of a bent
 	// plume at a given distance, from the range of entrainment
 	// coefficients between jets and plumes (α 0.08–0.12 top-hat) and the
 	// scatter of measured trajectories (SUGGESTION: about ±30 %).
+	// The zones about the path are widened by this fraction of the path's
+	// height above the axis.
 	BentTrajectoryScatter = 0.3
 	// bentStep is the integration step as a fraction of the top-hat
 	// radius (RK4; the state changes by about 6 % a step, and the
@@ -99,17 +104,19 @@ func (p *Plume) buildBent() {
 	air := Air()
 	dT0 := e.TotalTemperature - a.Temperature
 	rhoA := a.Pressure / (air.R * a.Temperature)
-	density := func(dT float64) float64 {
-		frac := 0.0
-		if dT0 != 0 {
-			frac = dT / dT0
-		}
-		r := air.R + frac*(e.Gas.R-air.R)
+	// state y = (Q, Mx, Mz, X, Z): mass flux/π (kg/s), momentum fluxes/π (N),
+	// position (m); the enthalpy flux Q·ΔT = Q0·ΔT0 and the jet gas's mass
+	// flux Q·Y = Q0 are constant
+	q0 := e.MassFlow / math.Pi
+	// density at mass flux q and excess temperature dT: the jet gas's mass
+	// fraction q0/q sets the gas constant (a light gas rises unheated); the
+	// temperature is the total one, as the jet's kinetic energy returns as
+	// heat when it slows (at the exit this makes the jet a little lighter
+	// than its static state, erring toward more rise)
+	density := func(q, dT float64) float64 {
+		r := air.R + q0/q*(e.Gas.R-air.R)
 		return a.Pressure / (r * (a.Temperature + dT))
 	}
-	// state y = (Q, Mx, Mz, X, Z): mass flux/π (kg/s), momentum fluxes/π (N),
-	// position (m); the enthalpy flux Q·ΔT = Q0·ΔT0 is constant
-	q0 := e.MassFlow / math.Pi
 	// the jet's momentum flux is its thrust (with the pressure thrust of an
 	// imperfectly expanded exit); its density that of the mixed gas
 	m0 := e.Thrust / math.Pi
@@ -120,7 +127,7 @@ func (p *Plume) buildBent() {
 		m := math.Hypot(mx, mz)
 		v = m / q
 		dT = h0 / q
-		rho = density(dT)
+		rho = density(q, dT)
 		b = math.Sqrt(q / (rho * v))
 		return b, v, rho, dT, math.Atan2(mz, mx)
 	}
@@ -128,7 +135,7 @@ func (p *Plume) buildBent() {
 		q, mx, mz := y[0], y[1], y[2]
 		m := math.Hypot(mx, mz)
 		v := m / q
-		rho := density(h0 / q)
+		rho := density(q, h0/q)
 		b2 := q / (rho * v)
 		return state{
 			2 * bentAlpha * math.Sqrt(b2) * v * math.Sqrt(rho*rhoA),
@@ -141,16 +148,25 @@ func (p *Plume) buildBent() {
 	tail := p.cons.m.Tail
 	lambda := p.cons.m.Lambda
 	dTLim := lim.Temperature - a.Temperature
+	velEnv, hotEnv := p.Envelope(VelocityZone, Conservative), p.Envelope(HotZone, Conservative)
 	point := func(y state, s float64) BentPoint {
 		b, v, _, dT, phi := decode(y)
 		bg := b / math.Sqrt2
 		pt := BentPoint{X: y[3], Z: y[4], S: s, Uc: 2 * v, DTc: dT * (1 + lambda*lambda) / (lambda * lambda), Width: bg, Angle: phi}
+		// the zone's radius: the centreline values of the jet's entrainment
+		// (the least diluted), widened toward the plume's width as the path
+		// turns up, plus the scatter of the path's rise, and never less than the
+		// conservative straight zone at the same distance along the path
+		w := bg * plumeWidening(phi)
+		drift := BentTrajectoryScatter * math.Abs(pt.Z)
 		if pt.Uc > lim.Velocity {
-			pt.RVel = tail * bg * math.Sqrt(math.Log(pt.Uc/lim.Velocity))
+			pt.RVel = tail*w*math.Sqrt(math.Log(pt.Uc/lim.Velocity)) + drift
 		}
 		if dTLim > 0 && pt.DTc > dTLim {
-			pt.RHot = tail * lambda * bg * math.Sqrt(math.Log(pt.DTc/dTLim))
+			pt.RHot = tail*lambda*w*math.Sqrt(math.Log(pt.DTc/dTLim)) + drift
 		}
+		pt.RVel = math.Max(pt.RVel, velEnv.Radius(s))
+		pt.RHot = math.Max(pt.RHot, hotEnv.Radius(s))
 		return pt
 	}
 	y := state{q0, m0, 0, 0, 0}
@@ -231,8 +247,13 @@ func pathTolerance(all, kept []BentPoint) float64 {
 		}
 		a, b := kept[i-1], kept[i]
 		d := math.Sqrt(segmentDistanceSquared(pt.X, pt.Z, [2]float64{a.X, a.Z}, [2]float64{b.X, b.Z}))
-		r := math.Max(pt.RVel, pt.RHot)
-		tol = math.Max(tol, d+r-math.Max(math.Max(a.RVel, a.RHot), math.Max(b.RVel, b.RHot)))
+		// each zone against its own tube: a peak of one zone between kept
+		// points must not hide behind the other zone's radius
+		for _, z := range []Zone{VelocityZone, HotZone} {
+			if r := pt.Radius(z); r > 0 {
+				tol = math.Max(tol, d+r-math.Max(a.Radius(z), b.Radius(z)))
+			}
+		}
 	}
 	return math.Max(0, tol)
 }
@@ -308,4 +329,25 @@ func (bp *BentPlume) finite() error {
 		return &InputError{Field: "operating point", Reason: "gives a bent-plume path that is not finite"}
 	}
 	return nil
+}
+
+// BentEdge returns the radius about the bent path at pt where the mean
+// velocity falls to the fraction frac of its value on the path, m: the
+// Gaussian of the plume's entrainment width, times the tail factor of the
+// conservative model (1.15).
+func BentEdge(pt BentPoint, frac float64) float64 {
+	if !(frac > 0 && frac < 1) {
+		return 0
+	}
+	return ConservativeModel().Tail * pt.Width * plumeWidening(pt.Angle) * math.Sqrt(-math.Log(frac))
+}
+
+// plumeWidening returns the factor on the jet-entrainment width of the
+// zones about the path at a path angle phi (rad above the horizontal):
+// 1 where the flow runs level and is still jet-like, rising to the ratio
+// of the plume and jet entrainment coefficients (0.12/0.08) where it rises
+// vertically as a plume, with |sin φ| between (SUGGESTION, after the
+// angle-blended entrainment of Priestley & Ball 1955, from memory).
+func plumeWidening(phi float64) float64 {
+	return 1 + (bentAlphaPlume/bentAlpha-1)*math.Abs(math.Sin(phi))
 }

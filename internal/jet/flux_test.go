@@ -288,3 +288,23 @@ func TestOverflowIsAnErrorNotNoZone(t *testing.T) {
 		}
 	}
 }
+
+// TestLipLayerDensityFactor checks the lip-edge construction itself: its
+// slope carries the Brown & Roshko (1974) density factor
+// (1 + sqrt(ρa/ρj))/2 for a light jet (from memory) and is never reduced
+// for a dense one.
+func TestLipLayerDensityFactor(t *testing.T) {
+	a := StandardAmbient()
+	for _, tr := range []float64{0.8, 1, 2, 3.5} {
+		c := Condition{Primary: Stream{NPR: 1.3, TemperatureRatio: tr}, Ambient: a}
+		p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: 0.05}, c, DefaultLimits())
+		if err != nil {
+			t.Fatal(err)
+		}
+		want := math.Max(1, (1+math.Sqrt(1/p.Exit().DensityRatio))/2)
+		lip := p.nearEdge(0, 0.1)
+		if got := (p.nearEdge(1, 0.1) - lip) / 0.1; !near(got, want, 1e-12) {
+			t.Errorf("T0/Ta %g: slope factor %.5f, want %.5f", tr, got, want)
+		}
+	}
+}

@@ -68,8 +68,11 @@ func bentClearance(bp *jet.BentPlume, z jet.Zone, probes []bentProbe, best float
 		return math.Inf(1), ""
 	}
 	xmin, xmax, vmin, vmax, rmax := math.Inf(1), math.Inf(-1), math.Inf(1), math.Inf(-1), 0.0
-	for _, pt := range bp.Path {
-		if r := pt.Radius(z); r > 0 {
+	for i, pt := range bp.Path {
+		// both ends of every segment with a tube: the last segment of a
+		// zone runs to the first point where its radius is 0
+		r := pt.Radius(z)
+		if r > 0 || (i > 0 && bp.Path[i-1].Radius(z) > 0) {
 			xmin, xmax = math.Min(xmin, pt.X), math.Max(xmax, pt.X)
 			vmin, vmax = math.Min(vmin, pt.Z), math.Max(vmax, pt.Z)
 			rmax = math.Max(rmax, r)

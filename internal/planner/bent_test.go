@@ -7,6 +7,7 @@ import (
 
 	"gonum.org/v1/gonum/spatial/r3"
 
+	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
 )
 
@@ -65,5 +66,18 @@ func TestBentZoneBlocksAStation(t *testing.T) {
 	}
 	if math.IsNaN(c.Value) || c.Value >= 0 {
 		t.Errorf("bent clearance %.3f m, want negative", c.Value)
+	}
+}
+
+// TestCaptureFollowsTheBentPlume: a 6 m hood on the axis 10 m downstream
+// of a hot, slow exhaust whose path has risen several metres there must
+// not be called a capture (found in review: the straight plume fitted).
+func TestCaptureFollowsTheBentPlume(t *testing.T) {
+	req := hotSlowRequest(r3.Vec{X: 28, Y: 28, Z: 1})
+	req.Cell.Collector = &geometry.Collector{Inlet: r3.Vec{X: 12, Y: 5, Z: 1}, Diameter: 6}
+	p := mustPlan(t, req)
+	pt := p.Points[0]
+	if pt.Capture == OK {
+		t.Errorf("capture ok: %s", pt.CaptureReason)
 	}
 }

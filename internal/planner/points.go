@@ -64,12 +64,22 @@ func capture(req *Request, p *PointResult) (Verdict, string, float64) {
 	// plume (which carries only part of the exit momentum) would call a
 	// spilling hood clear, and silence the warnings downstream of it
 	edge := p.Plume.EdgeRadius(jet.Conservative, q.X, plumeEdgeFraction)
+	off := q.R // the inlet centre may sit off the axis
+	if pt, ok := bentAt(p.Plume.Bent(), q.X); ok {
+		// a buoyant plume may pass over (or under) the inlet: measure the
+		// inlet's offset from the bent path too, and the bent plume's own
+		// 5 % edge (the widths of plume entrainment, conservative)
+		v := col.Inlet.Z - req.Exit.Exit.Z
+		l := math.Sqrt(math.Max(0, q.R*q.R-v*v))
+		off = math.Max(off, math.Hypot(v-pt.Z, l))
+		edge = math.Max(edge, jet.BentEdge(pt, plumeEdgeFraction))
+	}
 	d := 2 * edge
-	need := 2 * (edge + q.R) // the inlet centre may sit off the axis
+	need := 2 * (edge + off)
 	ratio := need / col.Diameter
 	desc := fmt.Sprintf("plume %s wide (5 %% velocity edge, conservative) at the inlet %s downstream, collector %s", m(d), m(q.X), m(col.Diameter))
-	if q.R > 0.001 {
-		desc += fmt.Sprintf(", inlet %s off the axis", m(q.R))
+	if off > 0.001 {
+		desc += fmt.Sprintf(", inlet %s off the plume's axis", m(off))
 	}
 	switch {
 	case ratio <= 1:
@@ -144,4 +154,23 @@ func sourceAxis(f geometry.JetFrame, x float64, n int) []geometry.JetPoint {
 		out[i] = geometry.JetPoint{X: x * float64(i) / float64(n-1)}
 	}
 	return out
+}
+
+// bentAt interpolates the bent path of bp at axial distance x (m); ok is
+// false without a bent plume or past its end.
+func bentAt(bp *jet.BentPlume, x float64) (jet.BentPoint, bool) {
+	if bp == nil {
+		return jet.BentPoint{}, false
+	}
+	for i := 1; i < len(bp.Path); i++ {
+		a, b := bp.Path[i-1], bp.Path[i]
+		if b.X >= x && b.X > a.X {
+			u := math.Max(0, (x-a.X)/(b.X-a.X))
+			pt := a
+			pt.X, pt.Z = x, a.Z+u*(b.Z-a.Z)
+			pt.Width = a.Width + u*(b.Width-a.Width)
+			return pt, true
+		}
+	}
+	return jet.BentPoint{}, false
 }
