@@ -59,7 +59,11 @@ stations, zones and nozzle. The sheet's date is the layout's title date;
 without one the sheet says "not dated" and the PDF carries the fixed date
 2000-01-01, so the same layout always gives the same bytes.
 
---csv, --json and --geojson write the exports; --as-built-template writes the
+--csv, --json and --geojson write the exports (the CSV's lengths are in the
+layout's unit system, like its reasons: metres in _m columns, or decimal feet
+in _ft columns; the GeoJSON is in WGS 84 longitude and latitude when the
+layout has an anchor, else in the local cell frame, which it says);
+--as-built-template writes the
 form for 'arcwright check --as-built': the station IDs under the measured
 columns id, x, y, z, base_x, base_y, left empty to be filled in after set-up
 (bare numbers in the layout's length unit). Every destination is checked
