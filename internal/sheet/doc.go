@@ -19,13 +19,29 @@
 //
 // # What the sheet holds
 //
-// Sheet 1 carries the plan view to a standard scale (the largest of 1:10 …
-// 1:2000 that fits, or the one asked for) with the cell, the plume zones of
-// the governing operating point, the arrays and stations with their labels,
-// the scale bar, the cautions panel, the legend and the title block. The
-// following sheets carry the elevation along the jet axis, the set-up steps,
-// the station table, the operating-points table, the absorption table and the
-// planner's notes. Every sheet has the title block in its bottom-right corner.
+// Sheet 1 carries the plan view at a standard scale (ISO 5455 1:1 … 1:5000
+// with 1:25 and 1:75; on a feet-and-inches sheet the architect's and the
+// engineer's scales; the largest that fits, or the one asked for), the
+// cell, the plume zones, the arrays and stations with their labels, orange
+// warning triangles where a zone meets a surface or bends, the scale bar,
+// the safety panel (the WARNING signal word of ANSI Z535.4 and ISO 3864-2),
+// the legend, the notes, the plan's warnings and the title block. An open
+// site much larger than its stations is drawn cropped to them, with break
+// marks where its boundary leaves the frame. The following sheets carry the
+// elevation (the vertical section through the axis, zones cut at the floor,
+// ceiling and walls) and the clearance view (each station at its true
+// distance from the axis), detail views of arrays too dense to label at the
+// plan's scale, the set-out table on a sheet of its own, the set-up steps,
+// the station table (nominal and as-placed radius and angle, the point of
+// each clearance), the operating-points table, the absorption table and the
+// planner's warnings. Every sheet has the title block in its bottom-right
+// corner.
+//
+// # Dates
+//
+// Nothing reads the clock: the issue date is the layout's title date, and
+// the PDF's creation date that date at 00:00 UTC, or [Undated] when the
+// layout has none, so the same layout gives the same bytes.
 //
 // # Zones drawn
 //
