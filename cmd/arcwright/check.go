@@ -31,9 +31,9 @@ warning: only its planned place was checked). The microphone and the stand
 base are checked separately: each as-built station shows how far its
 microphone and its base are from their planned places, and a microphone
 moved without its base (no base measured, or a base whose arm to the
-microphone is not the stand's) is flagged. A height column (height_m, height_ft), as the
-station CSV has, is read like z; the two must agree. --format json prints the plan
-with the as-built positions.
+microphone is not the stand's) is flagged. A height column (height_m or
+height_ft, as the station CSV has) is read like z; the two must agree.
+--format json prints the plan with the as-built positions.
 
 A station is reported ok only if every check passed for every operating
 point; a station that could not be evaluated is never ok.
