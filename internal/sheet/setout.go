@@ -57,7 +57,7 @@ func (b *builder) setOutTable() tableSpec {
 	refs := b.floorRefs()
 	for i := range b.plan.Stations {
 		s := &b.plan.Stations[i]
-		var tp [2]string
+		tp := [2]string{"-", "-"}
 		for k, c := range nearestRefs(refs, s.Base) {
 			tp[k] = c.r.name + ": " + pr.cell(c.d)
 		}
