@@ -30,7 +30,36 @@
 //     as a passive scalar (Chen & Rodi 1980).
 //
 // Low-Reynolds-number jets use the laminar similarity solutions of
-// Schlichting (1933, round) and Bickley (1937, plane) instead.
+// Schlichting (1933, round) and Bickley (1937, plane) instead; the switch is
+// on Uj·D_eff over the ambient air's viscosity, which the mixed jet has.
+//
+// # Flux consistency
+//
+// A free jet at ambient pressure carries its exit momentum flux and its
+// excess-enthalpy (mixture-fraction) flux unchanged. The conservative
+// field is widened wherever its spreading law falls short of carrying the
+// whole of both, computed with the field's own density (flux.go); its
+// shoulder keeps growing at the far-field rate from its end-of-core width,
+// and its mixing layer takes the upper end of the compressibility
+// reduction's scatter (Φ + 0.1). A property test checks both fluxes and the
+// monotone outline over NPR 1.05–5, T0/Ta 1–4 and every nozzle kind. A pipe
+// exit (Nozzle.Contour) decays more slowly (B 6.4 nominal, 6.6 conservative,
+// from memory).
+//
+// # Bent and attached zones
+//
+// [Plume.Bent] integrates the path of a buoyant jet whose zones reach past
+// the onset of buoyancy: a top-hat integral model (Morton, Taylor & Turner
+// 1956, any direction, non-Boussinesq), entrainment α = 0.08 (Ricou &
+// Spalding 1961) for the path and centreline values, widths widened toward
+// the plume's α = 0.12 as the path turns up, the rise's ±30 % scatter
+// added to the radius, and never narrower than the straight zone at the
+// same distance along the path. [Plume.WallJet] and [Plume.RadialJet] carry
+// a zone on along a surface it reaches: a three-dimensional wall jet
+// (spreading 0.32 along and 0.05 away from the surface, Launder & Rodi 1983,
+// from memory) or a radial wall jet over a surface across the jet (decay
+// constants derived from the arriving fluxes with δ½ = 0.085 r). Both are
+// predictions with a wider scatter than the free jet's.
 //
 // # Envelopes
 //

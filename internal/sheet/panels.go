@@ -80,6 +80,7 @@ func (b *builder) cautionItems() []string {
 		fmt.Sprintf("The zones are predictions of the MEAN flow: turbulent gusts are well above the mean. Drawn: velocity zone where the mean velocity exceeds %s, hot zone where the total temperature exceeds %s, each with a margin of %s. The envelopes use the conservative end of the published scatter.",
 			pr.speed(b.lim.Velocity), pr.temp(b.lim.Temperature), pr.length(b.lim.Margin)),
 		b.drawnWhat() + " Every station was checked against every operating point.",
+		"BENT AND WALL-JET ZONES: where a hot, slow plume rises, and where a zone reaches the floor, a wall or the ceiling and runs on along it, those zones are drawn and checked too. They are predictions with a wider scatter than the free jet's: keep well clear of them and of every surface the exhaust strikes.",
 		"NOISE: wear hearing protection in and near the cell. Keep out of the cell during runs. The predicted levels and contours are estimates (about ±3 dB at best); hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice.",
 		"Before every run: clearances re-measured, nothing loose in the zones, cables secured outside the zones, people out of the cell, headcount done.",
 		"Nozzle, ducting and plume-side hardware stay hot after shutdown.",
