@@ -193,7 +193,7 @@ func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
 					dir = "down"
 				}
 				zone := math.Max(p.Velocity().Length, p.Hot().Length)
-				w = append(w, fmt.Sprintf("%s: buoyant: the %s zone reaches beyond %s, where buoyancy starts to bend the jet %s (x_b = 0.53, Chen & Rodi 1980; momentum length %s); stations are checked against the zones both straight and bent along the integral-model path (about ±30 %% in rise)",
+				w = append(w, fmt.Sprintf("%s: buoyant: the %s zone reaches beyond %s, where buoyancy starts to bend the jet %s (x_b = 0.53, Chen & Rodi 1980; momentum length %s); the bent zones are checked too",
 					p.Name, ck.m(zone), ck.m(b.Onset), dir, ck.m(b.MomentumLength)))
 			}
 		}

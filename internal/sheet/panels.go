@@ -49,7 +49,9 @@ func (b *builder) column(pg *Page, notes []string) {
 	y = b.cautions(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
 	y = b.legend(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
 	y = b.notesPanel(pg, Rect{col.X + 1.5, y, col.W - 3, 0}, notes) + gapMM
-	if len(b.plan.Warnings) > 0 {
+	// the warnings panel needs room for its heading and one line at least
+	// (all warnings are printed in full on a later sheet)
+	if need := 4 + capHeight(sizeHeading) + 0.8 + 2*lineHeight(sizeSmall); len(b.plan.Warnings) > 0 && col.Bottom()-y >= need {
 		y = b.warningsPanel(pg, Rect{col.X + 1.5, y, col.W - 3, col.Bottom() - y}) + gapMM
 	}
 	if len(b.model.Key) > 0 {
@@ -80,7 +82,7 @@ func (b *builder) cautionItems() []string {
 		fmt.Sprintf("The zones are predictions of the MEAN flow: turbulent gusts are well above the mean. Drawn: velocity zone where the mean velocity exceeds %s, hot zone where the total temperature exceeds %s, each with a margin of %s. The envelopes use the conservative end of the published scatter.",
 			pr.speed(b.lim.Velocity), pr.temp(b.lim.Temperature), pr.length(b.lim.Margin)),
 		b.drawnWhat() + " Every station was checked against every operating point.",
-		"BENT AND WALL-JET ZONES: where a hot, slow plume rises, and where a zone reaches the floor, a wall or the ceiling and runs on along it, those zones are drawn and checked too. They are predictions with a wider scatter than the free jet's: keep well clear of them and of every surface the exhaust strikes.",
+		"Bent (rising) and wall-jet zones are drawn and checked too; their scatter is wider than the free jet's: keep well clear of every surface the exhaust strikes.",
 		"NOISE: wear hearing protection in and near the cell. Keep out of the cell during runs. The predicted levels and contours are estimates (about ±3 dB at best); hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice.",
 		"Before every run: clearances re-measured, nothing loose in the zones, cables secured outside the zones, people out of the cell, headcount done.",
 		"Nozzle, ducting and plume-side hardware stay hot after shutdown.",
@@ -187,7 +189,7 @@ func (b *builder) warningsPanel(pg *Page, r Rect) float64 {
 	indent := b.m.width("• ", sz, false)
 	for i, w := range ws {
 		lines := b.m.wrap(clean(w), r.W-2*pad-indent, sz, false)
-		if y+float64(len(lines)+1)*lh+pad > r.Bottom() && i > 0 {
+		if y+float64(len(lines)+1)*lh+pad > r.Bottom() {
 			y += lh
 			pg.Texts = append(pg.Texts, Text{X: r.X + pad, Y: y, Size: sz, Bold: true,
 				Text: clean(plural(len(ws)-i, "more warning") + ": see PLANNER WARNINGS on a later sheet.")})
