@@ -52,6 +52,8 @@ type builder struct {
 	ranges    string   // the first range label on the plan, "" if none
 	cropped   bool     // the plan shows the region of interest, not the whole cell
 	details   []detail // the detail views of dense arrays
+	// warningsShown counts the plan's warnings (safety first) on sheet 1
+	warningsShown int
 	// hazardsDrawn are the hazards marked on the plan
 	hazardsDrawn []hazard
 	noise        *planner.NoiseMap // the predicted noise contours; nil when noiseErr says why
@@ -312,11 +314,12 @@ func (b *builder) continuation() {
 		f.gap(3)
 		f.table(t)
 	}
-	if len(b.plan.Warnings) > 0 {
+	// the warnings that did not fit sheet 1's panel
+	if rest := b.safetyFirst()[b.warningsShown:]; len(rest) > 0 {
 		f.gap(3)
-		f.heading("PLANNER WARNINGS", 10)
+		f.heading("PLANNER WARNINGS (continued from sheet 1)", 10)
 		var ls []textLine
-		for _, w := range b.plan.Warnings {
+		for _, w := range rest {
 			ls = append(ls, textLine{text: "• " + w, indent: 0})
 		}
 		f.columns(ls)

@@ -195,6 +195,7 @@ func (b *builder) warningsPanel(pg *Page, r Rect) float64 {
 				Text: clean(plural(len(ws)-i, "more warning") + ": see PLANNER WARNINGS on a later sheet.")})
 			break
 		}
+		b.warningsShown = i + 1
 		for j, l := range lines {
 			y += lh
 			if j == 0 {
