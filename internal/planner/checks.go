@@ -130,10 +130,11 @@ type checker struct {
 	sources   []r3.Vec
 	srcPoint  string // the point whose source region is longest
 	maxFoot   float64
-	splashes  []splash    // where zones strike obstacles
-	attached  []Attached  // zones carried on by the floor, ceiling and walls
-	fresnel   [][]float64 // L²/λ per point and band, m
-	noise     *noiseModel // level predictions
+	splashes  []splash      // where zones strike obstacles
+	attached  []Attached    // zones carried on by the floor, ceiling and walls
+	fresnel   [][]float64   // L²/λ per point and band, m
+	noise     *noiseModel   // level predictions
+	imps      []Impingement // where zones reach surfaces, for the warnings
 }
 
 // m prints a length in the layout's units, to about three figures.

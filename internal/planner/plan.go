@@ -58,6 +58,29 @@ const (
 	CheckAsBuilt    = "as_built_offset"    // how far the measured microphone is from its planned place, m (as-built checks only)
 )
 
+// The surfaces an [Impingement] names.
+const (
+	SurfaceBoundary = "boundary" // the walls, or an outdoor site's limit
+	SurfaceFloor    = "floor"    // the floor, or the ground of a pad
+	SurfaceCeiling  = "ceiling"
+	SurfaceObstacle = "obstacle"
+)
+
+// Impingement is where a conservative zone of an operating point first
+// reaches a surface of the cell: there the exhaust turns into a wall jet
+// that the free-jet model does not describe.
+type Impingement struct {
+	Point    string   // the operating point
+	Zone     jet.Zone // velocity or hot
+	Surface  string   // SurfaceBoundary, SurfaceFloor, SurfaceCeiling or SurfaceObstacle
+	Obstacle string   // the obstacle's name for SurfaceObstacle, else ""
+	// X is the jet-frame distance of the first contact, m.
+	X float64
+	// At is where to mark it in plan, cell frame, m: the zone's edge
+	// outside the boundary, else the axis at X.
+	At orb.Point
+}
+
 // Measurement says where the position a station was checked at comes from.
 type Measurement int
 
@@ -235,8 +258,12 @@ type Plan struct {
 	Absorption []AbsorptionRow
 	// Crew is every crew position's exposure, one entry per operating
 	// point, crew positions in layout order.
-	Crew     []CrewExposure
-	Warnings []string
+	Crew []CrewExposure
+	// Impingements lists where each point's conservative zones reach the
+	// boundary, the floor, the ceiling or an obstacle upstream of the
+	// collector: what the warnings say in words and the sheet marks.
+	Impingements []Impingement
+	Warnings     []string
 	// Counts of stations by verdict.
 	OK, Warn, Blocked int
 }

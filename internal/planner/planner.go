@@ -352,6 +352,8 @@ func (ck *checker) summarisePlan(plan *Plan, placed []placedArray) {
 	}
 	plan.Absorption = ck.absorptionTable(plan.Arrays, plan.Stations)
 	plan.Crew = ck.crewExposures()
+	plan.Impingements = impingements(ck.req, ck.obstacles, ck.points)
+	ck.imps = plan.Impingements
 	plan.Warnings = append(ck.warnings(ck.atm), ck.noiseWarnings(plan)...)
 }
 

@@ -29,6 +29,9 @@ type contact struct {
 	// x is the jet-frame axial distance, m, at which the zone first reaches
 	// the surface.
 	x float64
+	// at is where to mark the contact in plan, cell frame, m: the zone's
+	// edge outside the boundary, else the axis at x.
+	at orb.Point
 }
 
 // Thresholds of the search for obstacles in a zone.
@@ -72,6 +75,7 @@ func zoneReaches(req *Request, obstacles *geometry.Index, env *jet.Envelope, cap
 	cell := &req.Cell
 	f := req.Exit
 	wall, floor, ceiling := math.Inf(1), math.Inf(1), math.Inf(1)
+	var wallAt orb.Point
 	for _, q := range env.Points {
 		x, r := q[0], q[1]
 		if x >= capture {
@@ -79,8 +83,8 @@ func zoneReaches(req *Request, obstacles *geometry.Index, env *jet.Envelope, cap
 		}
 		for _, az := range []float64{0, math.Pi} {
 			c := f.ToCell(geometry.JetPoint{X: x, R: r, Azimuth: az})
-			if cell.Bounded() && !cell.Contains(orb.Point{c.X, c.Y}) {
-				wall = math.Min(wall, x)
+			if cell.Bounded() && x < wall && !cell.Contains(orb.Point{c.X, c.Y}) {
+				wall, wallAt = x, orb.Point{c.X, c.Y}
 			}
 		}
 		if f.Exit.Z-r < 0 {
@@ -96,7 +100,12 @@ func zoneReaches(req *Request, obstacles *geometry.Index, env *jet.Envelope, cap
 		x    float64
 	}{{surfaceBoundary, wall}, {surfaceFloor, floor}, {surfaceCeiling, ceiling}} {
 		if !math.IsInf(s.x, 1) {
-			out = append(out, contact{surface: s.kind, obstacle: -1, x: s.x})
+			a := f.ToCell(geometry.JetPoint{X: s.x})
+			c := contact{surface: s.kind, obstacle: -1, x: s.x, at: orb.Point{a.X, a.Y}}
+			if s.kind == surfaceBoundary {
+				c.at = wallAt
+			}
+			out = append(out, c)
 		}
 	}
 	return append(out, obstacleReaches(f, obstacles, env, capture)...)
@@ -128,7 +137,8 @@ func obstacleReaches(f geometry.JetFrame, obstacles *geometry.Index, env *jet.En
 				continue
 			}
 			seen[i] = true
-			out = append(out, contact{surface: surfaceObstacle, obstacle: i, x: x})
+			a := f.ToCell(geometry.JetPoint{X: x})
+			out = append(out, contact{surface: surfaceObstacle, obstacle: i, x: x, at: orb.Point{a.X, a.Y}})
 		}
 		x = next
 	}
@@ -238,4 +248,30 @@ func (ck *checker) splashCheck(c *Check, nearest string, st *Station, arm []r3.V
 	}
 	c.Reason = fmt.Sprintf("%s, which the %s of %s strikes about %s downstream of the exit: the exhaust spreads along its faces as a wall jet that the free-jet model does not describe; move the station clear of it",
 		lead, s.zone, s.point, ck.m(s.x))
+}
+
+// impingements returns where the conservative zones of points reach the
+// boundary, the floor, the ceiling or an obstacle (indexed in obstacles) of
+// req's cell upstream of the collector, point by point, velocity zone
+// first: Plan.Impingements.
+func impingements(req *Request, obstacles *geometry.Index, points []PointResult) []Impingement {
+	names := map[surface]string{surfaceBoundary: SurfaceBoundary, surfaceFloor: SurfaceFloor, surfaceCeiling: SurfaceCeiling, surfaceObstacle: SurfaceObstacle}
+	var out []Impingement
+	for k := range points {
+		p := &points[k]
+		if p.Plume == nil {
+			continue
+		}
+		capture := captureX(req, p)
+		for _, env := range []*jet.Envelope{p.Velocity(), p.Hot()} {
+			for _, c := range zoneReaches(req, obstacles, env, capture) {
+				im := Impingement{Point: p.Name, Zone: env.Zone, Surface: names[c.surface], X: c.x, At: c.at}
+				if c.surface == surfaceObstacle {
+					im.Obstacle = req.Cell.Obstacles[c.obstacle].Name
+				}
+				out = append(out, im)
+			}
+		}
+	}
+	return out
 }

@@ -206,24 +206,25 @@ func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
 }
 
 // impingement says where a point's conservative zones reach the walls, the
-// floor, the ceiling or an obstacle upstream of the collector (zoneReaches):
-// there the exhaust turns into a wall jet that the free-jet model does not
-// describe.
+// floor, the ceiling or an obstacle upstream of the collector
+// (Plan.Impingements, from zoneReaches): there the exhaust turns into a wall
+// jet that the free-jet model does not describe.
 func (ck *checker) impingement(p *PointResult) []string {
-	capture := captureX(ck.req, p)
 	var out []string
-	for _, z := range []struct {
-		name string
-		env  *jet.Envelope
-	}{{"velocity zone", p.Velocity()}, {"hot zone", p.Hot()}} {
-		for _, c := range zoneReaches(ck.req, ck.obstacles, z.env, capture) {
-			if c.surface == surfaceObstacle {
-				out = append(out, fmt.Sprintf("%s: the %s strikes the obstacle %s about %s downstream of the exit: the exhaust spreads along its faces there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of it", p.Name, z.name, ck.req.Cell.Obstacles[c.obstacle].Name, ck.m(c.x)))
-				continue
-			}
-			what := map[surface]string{surfaceBoundary: ck.boundaryName(), surfaceFloor: ck.floorName(), surfaceCeiling: "ceiling"}[c.surface]
-			out = append(out, fmt.Sprintf("%s: the %s reaches the %s about %s downstream of the exit: the exhaust spreads along it there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of that surface", p.Name, z.name, what, ck.m(c.x)))
+	for _, im := range ck.imps {
+		if im.Point != p.Name {
+			continue
 		}
+		zone := "velocity zone"
+		if im.Zone == jet.HotZone {
+			zone = "hot zone"
+		}
+		if im.Surface == SurfaceObstacle {
+			out = append(out, fmt.Sprintf("%s: the %s strikes the obstacle %s about %s downstream of the exit: the exhaust spreads along its faces there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of it", p.Name, zone, im.Obstacle, ck.m(im.X)))
+			continue
+		}
+		what := map[string]string{SurfaceBoundary: ck.boundaryName(), SurfaceFloor: ck.floorName(), SurfaceCeiling: "ceiling"}[im.Surface]
+		out = append(out, fmt.Sprintf("%s: the %s reaches the %s about %s downstream of the exit: the exhaust spreads along it there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of that surface", p.Name, zone, what, ck.m(im.X)))
 	}
 	return out
 }
