@@ -16,14 +16,11 @@ type planFit struct {
 	cropped bool // ext is the region of interest, not the whole cell
 }
 
-// roiExtent returns the region of interest of the plan, m: every station and
-// stand base, the nozzle, the array centres and, when withZones, the zones
-// of the drawn points as far as the cell's boundary lets them run; padded by
-// 5 % (at least 1 m). The datum, the marks and the obstacles are not part of
-// it: they are drawn where they fall inside the frame.
-func (b *builder) roiExtent(withZones bool) orb.Bound {
+// extendWorks returns bd grown to hold the nozzle exit and body, the array
+// centres and every station's microphone and stand base, m.
+func (b *builder) extendWorks(bd orb.Bound) orb.Bound {
 	ex := b.req.Exit
-	bd := orb.Bound{Min: orb.Point{ex.Exit.X, ex.Exit.Y}, Max: orb.Point{ex.Exit.X, ex.Exit.Y}}
+	bd = bd.Extend(orb.Point{ex.Exit.X, ex.Exit.Y})
 	up := ex.ToCell(geometry.JetPoint{X: -nozzleLen(b.gov.Exit.Diameter)})
 	bd = bd.Extend(orb.Point{up.X, up.Y})
 	for _, a := range b.plan.Arrays {
@@ -33,6 +30,17 @@ func (b *builder) roiExtent(withZones bool) orb.Bound {
 		s := &b.plan.Stations[i]
 		bd = bd.Extend(orb.Point{s.Mic.X, s.Mic.Y}).Extend(s.Base)
 	}
+	return bd
+}
+
+// roiExtent returns the region of interest of the plan, m: every station and
+// stand base, the nozzle, the array centres and, when withZones, the zones
+// of the drawn points as far as the cell's boundary lets them run; padded by
+// 5 % (at least 1 m). The datum, the marks and the obstacles are not part of
+// it: they are drawn where they fall inside the frame.
+func (b *builder) roiExtent(withZones bool) orb.Bound {
+	ex := b.req.Exit
+	bd := b.extendWorks(orb.Bound{Min: orb.Point{ex.Exit.X, ex.Exit.Y}, Max: orb.Point{ex.Exit.X, ex.Exit.Y}})
 	if withZones {
 		var zb orb.Bound
 		has := false
@@ -162,16 +170,4 @@ func (b *builder) planArea(p Paper) (float64, float64) {
 func columnWidth(fw float64) float64 { return clamp(0.27*fw, 92, 112) }
 
 // joinOr joins phrases with commas and "or".
-func joinOr(s []string) string {
-	switch len(s) {
-	case 0:
-		return ""
-	case 1:
-		return s[0]
-	}
-	out := s[0]
-	for _, x := range s[1 : len(s)-1] {
-		out += ", " + x
-	}
-	return out + " or " + s[len(s)-1]
-}
+func joinOr(s []string) string { return joinWith(s, "or") }

@@ -4,6 +4,7 @@ import (
 	"github.com/paulmach/orb"
 	"math"
 	"strconv"
+	"strings"
 
 	"arcwright/internal/geometry"
 	"arcwright/internal/planner"
@@ -308,19 +309,15 @@ func (v *planView) zoneLabels(z zoneSet) {
 }
 
 // joinAnd joins words as "a", "a and b", "a, b and c".
-func joinAnd(s []string) string {
+func joinAnd(s []string) string { return joinWith(s, "and") }
+
+// joinWith joins words with commas and the conjunction before the last.
+func joinWith(s []string, conj string) string {
 	switch len(s) {
 	case 0:
 		return ""
 	case 1:
 		return s[0]
 	}
-	out := ""
-	for i, w := range s[:len(s)-1] {
-		if i > 0 {
-			out += ", "
-		}
-		out += w
-	}
-	return out + " and " + s[len(s)-1]
+	return strings.Join(s[:len(s)-1], ", ") + " " + conj + " " + s[len(s)-1]
 }

@@ -62,17 +62,7 @@ func (b *builder) planExtent() orb.Bound {
 	for _, m := range c.Marks {
 		bd = bd.Extend(m.At)
 	}
-	ex := b.req.Exit
-	bd = bd.Extend(orb.Point{ex.Exit.X, ex.Exit.Y})
-	up := ex.ToCell(geometry.JetPoint{X: -nozzleLen(b.gov.Exit.Diameter)})
-	bd = bd.Extend(orb.Point{up.X, up.Y})
-	for _, a := range b.plan.Arrays {
-		bd = bd.Extend(orb.Point{a.Centre.X, a.Centre.Y})
-	}
-	for i := range b.plan.Stations {
-		s := &b.plan.Stations[i]
-		bd = bd.Extend(orb.Point{s.Mic.X, s.Mic.Y}).Extend(s.Base)
-	}
+	bd = b.extendWorks(bd)
 	if !c.Bounded() {
 		w, h := bd.Max[0]-bd.Min[0], bd.Max[1]-bd.Min[1]
 		bd = bd.Pad(math.Max(1, 0.05*math.Max(w, h)))
