@@ -66,6 +66,9 @@ func (ck *checker) attachedZones() []Attached {
 						a.Solid.ZMin, a.Solid.ZMax = cell.Ceiling-w.MaxDepth, cell.Ceiling
 					}
 				case surfaceBoundary:
+					if cell.Kind == geometry.OutdoorPad {
+						continue // a site limit is a line on the ground, not a wall
+					}
 					s, ok := ck.wallContact(f, env, c.x)
 					if !ok {
 						continue
