@@ -78,7 +78,7 @@ const (
 // wholly outside is left out).
 //
 //	arc         LineString through the stations of each arc array, following the arc
-//	station     Point at the microphone: id, channel, array, status, z_m, polar_deg
+//	station     Point at the microphone: id, channel (null for a probe stand), array, status, z_m, polar_deg
 //	stand_base  Point at the stand pole, where it differs from the microphone's plan position
 //	crew        Point at a crew position: name, z_m, hours, and its loudest a_weighted_db,
 //	            peak_db, point and status
@@ -220,9 +220,13 @@ func (c *collection) addStations(p *planner.Plan) {
 		if s.Stand != nil {
 			stand = s.Stand.Name
 		}
+		var ch any // null for a probe stand, which has no channel
+		if s.Kind != planner.Probes {
+			ch = s.Channel
+		}
 		g, ok := c.point(s.Mic.X, s.Mic.Y)
 		c.add(layerStation, fmt.Sprintf("%q", s.ID), g, ok, geojson.Properties{
-			"id": s.ID, "channel": s.Channel, "array": s.Array, "kind": kindName(s.Kind),
+			"id": s.ID, "channel": ch, "array": s.Array, "kind": kindName(s.Kind),
 			"status": status, "z_m": metres(s.Mic.Z), "height_m": metres(s.Height),
 			"polar_deg": degrees(s.Polar), "stand": stand,
 		})
