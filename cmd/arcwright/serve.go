@@ -118,6 +118,12 @@ func runServe(ctx context.Context, o *ServeOptions, stdout, stderr io.Writer) er
 	if !loopback {
 		fmt.Fprintf(stderr, "arcwright: warning: listening on %s, which other computers can reach; the plan is served to anyone who asks. Use --addr 127.0.0.1:PORT to keep it on this computer.\n", addr)
 	}
+	if ps := srv.Problems(); len(ps) > 0 {
+		for _, p := range ps {
+			fmt.Fprintln(stderr, problemLine(p))
+		}
+		fmt.Fprintf(stderr, "arcwright: the layout has %d %s; the page lists %s until the file is fixed\n", len(ps), plural(len(ps), "problem", "problems"), plural(len(ps), "it", "them"))
+	}
 	fmt.Fprintf(stderr, "watching %s; Ctrl-C stops\n", o.Layout)
 
 	watchCtx, stopWatch := context.WithCancel(ctx)
@@ -148,4 +154,17 @@ func runServe(ctx context.Context, o *ServeOptions, stdout, stderr io.Writer) er
 		fmt.Fprintln(stderr, "stopped")
 	}
 	return failure
+}
+
+// problemLine prints a problem as the other commands print a layout's
+// errors: "file:line: key: message".
+func problemLine(p preview.Problem) string {
+	s := p.File
+	if p.Line > 0 {
+		s += ":" + strconv.Itoa(p.Line)
+	}
+	if p.Key != "" {
+		s += ": " + p.Key
+	}
+	return s + ": " + p.Message
 }

@@ -137,6 +137,37 @@ func TestServe(t *testing.T) {
 	}
 }
 
+// A layout with problems is served all the same; its problems are printed
+// with their lines, as the other commands print them.
+func TestServeBadLayout(t *testing.T) {
+	path := copyDemo(t, t.TempDir())
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	if err := os.WriteFile(path, bytes.Replace(data, []byte("diameter: 50.8 mm"), []byte("diameter: 50.8 kg"), 1), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	o := &ServeOptions{Layout: path, Addr: ":0"}
+	url, stderr, stop := startServe(t, func(ctx context.Context, stdout, stderr io.Writer) error {
+		return runServe(ctx, o, stdout, stderr)
+	})
+	res, err := http.Get(url + "plan.json")
+	if err != nil {
+		t.Fatal(err)
+	}
+	res.Body.Close()
+	if res.StatusCode != http.StatusUnprocessableEntity {
+		t.Errorf("got %d, want 422", res.StatusCode)
+	}
+	if err := stop(); err != nil {
+		t.Error(err)
+	}
+	if e := stderr.String(); !regexp.MustCompile(regexp.QuoteMeta(path)+`:[0-9]+: nozzle\.diameter: .*kg`).MatchString(e) || !strings.Contains(e, "1 problem;") {
+		t.Errorf("stderr %q lacks the problem with its line and key", e)
+	}
+}
+
 // SIGTERM (and Ctrl-C's SIGINT) stop the command cleanly with exit 0.
 func TestServeSignal(t *testing.T) {
 	path := copyDemo(t, t.TempDir())

@@ -181,6 +181,12 @@ func (s *Server) snapshot() *snapshot {
 	return s.snap
 }
 
+// Problems returns the problems that stop the file as it is now from
+// planning, nil when it plans.
+func (s *Server) Problems() []Problem {
+	return append([]Problem(nil), s.snapshot().problems...)
+}
+
 // Version returns the number of changes of what is served, from 1 after
 // the first plan.
 func (s *Server) Version() int { return s.snapshot().version }
