@@ -167,6 +167,22 @@ func (c *collection) addZones(p *planner.Plan) {
 		if grown := jet.GrowOutline(z.e.Points, margin, marginSamples); grown != nil {
 			c.addCut(layerZoneMargin, what, planRing(fr, grown), &r.Cell, props())
 		}
+		// the bent zone of a buoyant point and the zones the floor,
+		// ceiling and walls carry on, as the sheet draws them
+		if o := p.BentSection(z.pt, z.e.Zone, marginSamples); o != nil {
+			bp := props()
+			bp["variant"], bp["carried_by"] = "conservative", "bent by buoyancy"
+			c.addCut(layerZone, "bent "+what, planRing(fr, o), &r.Cell, bp)
+		}
+		for _, a := range p.Attached {
+			if a.Point != z.pt.Name || a.Zone != z.e.Zone || a.Solid.Footprint.IsCircle() {
+				continue
+			}
+			ap := props()
+			ap["carried_by"] = a.Surface
+			ap["z_min_m"], ap["z_max_m"] = metres(a.Solid.ZMin), metres(a.Solid.ZMax)
+			c.addCut(layerZone, a.Surface+" "+what, a.Solid.Footprint.Ring, &r.Cell, ap)
+		}
 	}
 	if gov.Plume != nil && gov.CoreNominal > 0 {
 		core := [][2]float64{{0, 0}, {0, gov.Exit.Diameter / 2}, {gov.CoreNominal, 0}}

@@ -12,7 +12,9 @@ import (
 	"github.com/paulmach/orb/planar"
 
 	"arcwright/internal/export"
+	"arcwright/internal/layout"
 	"arcwright/internal/planner"
+	"os"
 )
 
 // coordTol is the largest difference, m, between a written coordinate and
@@ -253,5 +255,37 @@ func TestGeoJSONNullProperty(t *testing.T) {
 	st := byLayer(t, writeGeoJSON(t, p))["station"]
 	if got, ok := st[1].Properties["polar_deg"]; !ok || got != nil {
 		t.Errorf("polar_deg: got %v (present %v), want null", got, ok)
+	}
+}
+
+// TestGeoJSONCarriedZones: the zones the sheet draws besides the free
+// ones, a bent zone of a buoyant point and the wall jets the floor, the
+// ceiling and the walls carry on, are written to the zone layer with what
+// carries them.
+func TestGeoJSONCarriedZones(t *testing.T) {
+	src, err := os.ReadFile("../../layouts/hard-wall-exhaust-room.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	req, _, err := layout.Decode("hard-wall-exhaust-room.yaml", src)
+	if err != nil {
+		t.Fatal(err)
+	}
+	p, err := planner.New(req)
+	if err != nil {
+		t.Fatal(err)
+	}
+	fc := writeGeoJSON(t, p)
+	carried := map[string]bool{}
+	for _, f := range byLayer(t, fc)["zone"] {
+		if by, ok := f.Properties["carried_by"].(string); ok {
+			carried[by] = true
+		}
+	}
+	if len(p.Attached) > 0 && !carried["wall"] && !carried["floor"] && !carried["ceiling"] {
+		t.Errorf("the plan has %d attached zones, the GeoJSON none: %v", len(p.Attached), carried)
+	}
+	if p.Points[p.Governing].Plume.Bent() != nil && !carried["bent by buoyancy"] {
+		t.Errorf("the governing point bends, the GeoJSON has no bent zone: %v", carried)
 	}
 }
