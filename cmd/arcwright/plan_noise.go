@@ -5,6 +5,7 @@ import (
 	"io"
 
 	"arcwright/internal/planner"
+	"arcwright/internal/units"
 )
 
 // planNoiseText prints the predicted levels by array and the crew
@@ -57,24 +58,11 @@ func planNoiseText(w io.Writer, p *planner.Plan) {
 		tw := newTable(w, 0)
 		fmt.Fprintln(tw, "  position\tpoint\tdB(A)\tpeak dB(C)\thours\tNIOSH allows\tstatus\t")
 		for _, e := range p.Crew {
-			fmt.Fprintf(tw, "  %s\t%s\t%.0f\t%.0f\t%.3g h\t%s\t%s\t\n", e.Name, e.Point, e.AWeighted, e.Peak, e.Hours, allowedWords(e.AllowedHours), e.Status)
+			fmt.Fprintf(tw, "  %s\t%s\t%.0f\t%.0f\t%.3g h\t%s\t%s\t\n", e.Name, e.Point, e.AWeighted, e.Peak, e.Hours, units.FormatHours(e.AllowedHours), e.Status)
 		}
 		tw.Flush()
 	}
 	if len(order) > 0 || len(p.Crew) > 0 {
 		fmt.Fprintln(w, "  "+noiseCaution)
 	}
-}
-
-// allowedWords prints an allowed time in h, min or s.
-func allowedWords(h float64) string {
-	switch {
-	case h >= 24:
-		return "> 24 h"
-	case h >= 1:
-		return fmt.Sprintf("%.3g h", h)
-	case h*60 >= 1:
-		return fmt.Sprintf("%.3g min", h*60)
-	}
-	return fmt.Sprintf("%.2g s", h*3600)
 }

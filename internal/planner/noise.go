@@ -11,6 +11,7 @@ import (
 	"arcwright/internal/acoustics"
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
+	"arcwright/internal/units"
 )
 
 // CheckLevel is the predicted OASPL at the microphone for the loudest
@@ -284,7 +285,7 @@ func (ck *checker) crewExposures() []CrewExposure {
 				e.Status = OK
 			}
 			e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
-				l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(c.Hours), e.Class, durationWords(e.AllowedHours))
+				l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(c.Hours), e.Class, units.FormatHours(e.AllowedHours))
 			if zone := ck.crewZone(k, c.At); zone != "" {
 				e.Status = Blocked
 				e.Reason = "inside the " + zone + " of " + e.Point + ": no one may stand here during its runs; " + e.Reason
@@ -325,19 +326,6 @@ func (ck *checker) crewZone(k int, pos r3.Vec) string {
 
 // hoursWords prints a number of hours.
 func hoursWords(h float64) string { return fmt.Sprintf("%.3g", h) }
-
-// durationWords prints an allowed time in h, min or s.
-func durationWords(h float64) string {
-	switch {
-	case h >= 24:
-		return "more than 24 h"
-	case h >= 1:
-		return fmt.Sprintf("%.3g h", h)
-	case h*60 >= 1:
-		return fmt.Sprintf("%.3g min", h*60)
-	}
-	return fmt.Sprintf("%.2g s", h*3600)
-}
 
 // noiseWarnings returns the plan's warnings about levels: an assumed room
 // absorption and crew positions that pass a limit.

@@ -5,6 +5,7 @@ import (
 	"strconv"
 
 	"arcwright/internal/planner"
+	"arcwright/internal/units"
 )
 
 // The noise contours and crew positions on the plan, and the level and crew
@@ -136,22 +137,7 @@ func (b *builder) crewTable() tableSpec {
 			status = "LIMIT"
 		}
 		t.rows = append(t.rows, []string{e.Name, b.pr.cell(e.At.X), b.pr.cell(e.At.Y), e.Point, fmt.Sprintf("%.0f", e.AWeighted), fmt.Sprintf("%.0f", e.Peak),
-			strconv.FormatFloat(e.Hours, 'g', 3, 64), allowedTime(e.AllowedHours), status, e.Reason})
+			strconv.FormatFloat(e.Hours, 'g', 3, 64), units.FormatHours(e.AllowedHours), status, e.Reason})
 	}
 	return t
-}
-
-// allowedTime prints an allowed time in h, min or s.
-func allowedTime(h float64) string {
-	switch {
-	case !finite(h):
-		return "-"
-	case h >= 24:
-		return "> 24 h"
-	case h >= 1:
-		return fmt.Sprintf("%.3g h", h)
-	case h*60 >= 1:
-		return fmt.Sprintf("%.3g min", h*60)
-	}
-	return fmt.Sprintf("%.2g s", h*3600)
 }
