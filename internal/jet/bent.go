@@ -165,8 +165,8 @@ func (p *Plume) buildBent() {
 		if dTLim > 0 && pt.DTc > dTLim {
 			pt.RHot = tail*lambda*w*math.Sqrt(math.Log(pt.DTc/dTLim)) + drift
 		}
-		pt.RVel = math.Max(pt.RVel, velEnv.Radius(s))
-		pt.RHot = math.Max(pt.RHot, hotEnv.Radius(s))
+		pt.RVel = math.Max(pt.RVel, velEnv.outlineRadius(s))
+		pt.RHot = math.Max(pt.RHot, hotEnv.outlineRadius(s))
 		return pt
 	}
 	y := state{q0, m0, 0, 0, 0}

@@ -116,6 +116,26 @@ func (e *Envelope) Clearance(x, r float64) float64 {
 	return d - e.Tolerance
 }
 
+// outlineRadius returns the radius of the outline at x, linearly
+// interpolated, plus the Tolerance: never less than the exact radius
+// (m; 0 outside [0, Length]). It is cheaper than Radius.
+func (e *Envelope) outlineRadius(x float64) float64 {
+	p := e.Points
+	if x < 0 || x > e.Length || len(p) < 3 {
+		return 0
+	}
+	i := sort.Search(len(p)-1, func(i int) bool { return p[i+1][0] >= x }) + 1
+	if i >= len(p) {
+		return 0
+	}
+	a, b := p[i-1], p[i]
+	r := max(a[1], b[1])
+	if i > 1 && b[0] > a[0] {
+		r = a[1] + (b[1]-a[1])*(x-a[0])/(b[0]-a[0])
+	}
+	return r + e.Tolerance
+}
+
 // insideOutline reports whether (x, r) lies inside the outline polygon: r
 // at most the outline's radius, linearly interpolated, at x.
 func (e *Envelope) insideOutline(x, r float64) bool {
