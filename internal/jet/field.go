@@ -7,6 +7,12 @@ const (
 	// treated as laminar: about 2,000 (common practice; "fully turbulent for
 	// Re > 2000" in Aaron Farrell's turbulent-jet notes).
 	laminarRoundRe = 2000
+	// laminarUpperRe is the upper end of the transition band: the
+	// transition Reynolds number is uncertain by about a factor of two
+	// (reference sheet §10), so up to twice the common-practice value the
+	// conservative zones hold the laminar solution's zones as well
+	// (SUGGESTION), and the conservative zone has no cliff at the switch.
+	laminarUpperRe = 2 * laminarRoundRe
 	// laminarPlaneRe is the slot Reynolds number below which a plane jet is
 	// laminar: about 30 (Andrade 1939, from memory; common practice).
 	laminarPlaneRe = 30

@@ -61,6 +61,8 @@ func (p *Plume) regimeFlags() []Flag {
 	switch {
 	case p.nom.laminar:
 		add(FlagLaminar, "Reynolds number %.0f (Uj·D_eff/ν of the ambient air) is below about 2,000 (common practice): the laminar Schlichting (1933) solution is used; the conservative zones also cover a turbulent jet", e.AmbientReynolds)
+	case e.AmbientReynolds < laminarUpperRe:
+		add(FlagOutsideFit, "Reynolds number %.0f (Uj·D_eff/ν of the ambient air) is in the transition band up to about 4,000: the jet may still be laminar, and the conservative zones hold the laminar Schlichting (1933) zones as well", e.AmbientReynolds)
 	case e.Reynolds < fittedRe:
 		add(FlagOutsideFit, "Reynolds number %.0f is below the ~10,000 of the turbulent decay data: real decay is faster (Abdel-Rahman et al. 1996), so the zones are over-estimated", e.Reynolds)
 	}

@@ -308,3 +308,33 @@ func TestLipLayerDensityFactor(t *testing.T) {
 		}
 	}
 }
+
+// TestNoCliffAtTheLaminarSwitch: the conservative zone of a 2 mm cold
+// bleed jet just above the laminar switch (Re ≈ 2,000, common practice) is
+// at least the laminar nominal zone just below it: the transition
+// Reynolds number is uncertain by about 2× (reference sheet §10), and the
+// old conservative zone shrank 29-fold across the switch (found in
+// review).
+func TestNoCliffAtTheLaminarSwitch(t *testing.T) {
+	a := StandardAmbient()
+	g := Air()
+	at := func(re float64) *Plume {
+		// velocity for the ambient-viscosity Reynolds number re on 2 mm
+		u := re * Viscosity(a.Temperature) / (a.Density() * 0.002)
+		m := u / g.SoundSpeed(a.Temperature-u*u/(2*g.Cp()))
+		c := Condition{Primary: Stream{NPR: g.PressureRatio(m), TotalTemperature: a.Temperature}, Ambient: a}
+		p, err := NewPlume(Nozzle{Kind: Convergent, Diameter: 0.002}, c, Limits{Velocity: 0.5, Temperature: 323.15})
+		if err != nil {
+			t.Fatal(err)
+		}
+		return p
+	}
+	below, above := at(1990), at(2010)
+	if !below.Laminar() || above.Laminar() {
+		t.Fatalf("laminar at 1990: %v, at 2010: %v", below.Laminar(), above.Laminar())
+	}
+	lam := below.Envelope(VelocityZone, Nominal).Length
+	if got := above.Envelope(VelocityZone, Conservative).Length; got < 0.95*lam {
+		t.Errorf("conservative zone at Re 2010 is %.3f m, the laminar zone at Re 1990 %.3f m", got, lam)
+	}
+}

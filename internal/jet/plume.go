@@ -307,6 +307,19 @@ func (p *Plume) buildEnvelopes() {
 		return r
 	}
 	p.env[0][0] = newEnvelope(VelocityZone, Nominal, uLim, nomTipU, nomU, p.nom.kinks()...)
+	// in the transition band the jet may still be laminar: the
+	// conservative zone holds the laminar solution's zone too
+	var lam *field
+	if !p.nom.laminar && p.exit.AmbientReynolds < laminarUpperRe {
+		f := newField(p.nom.m, p.nozzle, p.exit, p.cond.Ambient, true)
+		lam = &f
+	}
+	if lam != nil {
+		far0 := farU
+		farU = func(x float64) float64 { return max(far0(x), lam.contourU(x, uLim, 1)) }
+		domU = func(float64) bool { return false }
+		nomTipU = max(nomTipU, lam.tipU(uLim))
+	}
 	p.env[0][1] = p.conservative(VelocityZone, uLim, nomTipU, p.cons.tipU(uLim), farU, consU, domU, slopeU)
 
 	// hot zone, on the excess total temperature
@@ -343,6 +356,12 @@ func (p *Plume) buildEnvelopes() {
 		return r
 	}
 	p.env[1][0] = newEnvelope(HotZone, Nominal, tLim, nomTipT, nomT, p.nom.kinks()...)
+	if lam != nil {
+		far0 := farT
+		farT = func(x float64) float64 { return max(far0(x), lam.contourT(x, eps, 1)) }
+		domT = func(float64) bool { return false }
+		nomTipT = max(nomTipT, lam.tipT(eps))
+	}
 	p.env[1][1] = p.conservative(HotZone, tLim, nomTipT, p.cons.tipT(eps), farT, consT, domT, slopeT)
 }
 
