@@ -50,7 +50,7 @@ const (
 	// radius (RK4; the state changes by about 6 % a step, and the
 	// fourth-order error stays below 1e-5 of the state: the flux test
 	// checks conservation to 1e-6).
-	bentStep = 0.4
+	bentStep = 0.8
 	// bentMaxSteps bounds the integration.
 	bentMaxSteps = 20000
 	// bentSamples is the number of path points kept, evenly in path
