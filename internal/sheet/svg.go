@@ -304,19 +304,7 @@ var meters = sync.Pool{New: func() any { return newMeter() }}
 
 // pointZones returns what the sheet would draw of point pt's plume: its
 // conservative velocity and hot zones, their margins and its core.
-func (b *builder) pointZones(pt *planner.PointResult) zoneSet {
-	vel := pt.Plume.Envelope(jet.VelocityZone, jet.Conservative)
-	hot := pt.Plume.Envelope(jet.HotZone, jet.Conservative)
-	z := zoneSet{
-		vel: envelopeOutline(vel), hot: envelopeOutline(hot),
-		core: pt.CoreNominal, exitR: pt.Exit.Diameter / 2,
-		velLen: vel.Length, hotLen: hot.Length, hotPoint: pt.Name,
-		velPt: pt, hotPt: pt,
-	}
-	z.velM = marginOutline(z.vel, b.lim.Margin, 240)
-	z.hotM = marginOutline(z.hot, b.lim.Margin, 240)
-	return z
-}
+func (b *builder) pointZones(pt *planner.PointResult) zoneSet { return b.zoneSetOf(pt, pt) }
 
 // isZoneStyle reports whether s draws a zone ("zone.…").
 func isZoneStyle(s Style) bool { return strings.HasPrefix(string(s), "zone.") }

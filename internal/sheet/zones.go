@@ -76,15 +76,20 @@ type zoneSet struct {
 // governing point is the one with the largest velocity zone, often a cold
 // one).
 func (b *builder) zones() zoneSet {
-	g := b.gov
-	hp := &b.plan.Points[b.plan.GoverningHot]
+	return b.zoneSetOf(b.gov, &b.plan.Points[b.plan.GoverningHot])
+}
+
+// zoneSetOf returns what the sheet draws of the velocity zone and core of
+// point vp and the hot zone of point hp: their conservative envelopes and
+// margins.
+func (b *builder) zoneSetOf(vp, hp *planner.PointResult) zoneSet {
 	hot := hp.Plume.Envelope(jet.HotZone, jet.Conservative)
-	vel := g.Plume.Envelope(jet.VelocityZone, jet.Conservative)
+	vel := vp.Plume.Envelope(jet.VelocityZone, jet.Conservative)
 	z := zoneSet{
 		vel: envelopeOutline(vel), hot: envelopeOutline(hot),
-		core: g.CoreNominal, exitR: g.Exit.Diameter / 2,
+		core: vp.CoreNominal, exitR: vp.Exit.Diameter / 2,
 		velLen: vel.Length, hotLen: hot.Length, hotPoint: hp.Name,
-		velPt: g, hotPt: hp,
+		velPt: vp, hotPt: hp,
 	}
 	z.velM = marginOutline(z.vel, b.lim.Margin, 240)
 	z.hotM = marginOutline(z.hot, b.lim.Margin, 240)
