@@ -116,6 +116,14 @@ func ARP876InRange(vj, c0 float64) bool {
 	return lv >= arp876LogVMin && lv <= arp876LogVMax
 }
 
+// The table's aft lobe peaks at θi = 150° (30° from the jet axis) for
+// high-subsonic jets and moves toward the axis at lower speeds: below
+// Vj/c0 ≈ 0.9 its 160–180° rows hold its largest entries, without the dip
+// on the axis that measurements show (Morris, Richarz & Ribner 1973). The
+// lobe is flat there within about 1.5 dB, inside the wider uncertainty
+// stated within 30° of the axis ([NoiseSource.Uncertainty]); stations that
+// close to the axis are usually inside the plume's zones.
+
 // MixingDirectivity returns the ARP 876 directivity factor D at the polar
 // angle thetaJ (rad) from the downstream jet axis, for the velocity ratio
 // vr = Vj/c0. The table is in the inlet convention, θi = 180° − θj; it is

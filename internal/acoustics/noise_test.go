@@ -107,15 +107,47 @@ func TestLighthillVelocityExponent(t *testing.T) {
 }
 
 func TestPeakAngleAft(t *testing.T) {
-	// Peak OASPL of subsonic jets lies aft, about 25–35° from the
-	// downstream axis (acoustics.md §6.2, FROM MEMORY, high confidence; the
-	// issue asks 30–50°). The ARP 876 directivity table puts it at 30° for
-	// high-subsonic jets (Uj/c0 0.9–1); at lower speeds the table's own
-	// maximum moves toward the axis.
-	for _, vr := range []float64{0.9, 0.95, 1.0} {
-		_, a := peakOASPL(t, mustSource(t, isothermalJet(vr, 0.05)), 5)
-		if a < 30 || a > 50 {
-			t.Errorf("Uj/c0 = %.2f: got the peak at %.0f° from the jet axis, want 30–50°", vr, a)
+	// Peak OASPL of subsonic jets lies aft. Sources: acoustics.md §6.2
+	// (FROM MEMORY, high): about 25–35° from the downstream axis, moving
+	// outward as the convective Mach number rises; Morris, Richarz & Ribner
+	// 1973, J. Sound Vib. 29(4) 443–455 (READ, abstract): the directivity of
+	// a subsonic jet peaks between 15° and 45° from the jet axis. The issue
+	// asks 30–50°, which the ARP 876 directivity table (READ in MIT-LAE/pyNA,
+	// directivity_function.csv) meets for high-subsonic jets. Below
+	// Uj/c0 ≈ 0.9 the table's largest entries are in its 160–180° rows
+	// (θj 0–20°): its peak moves toward the axis, the trend of §6.2, and its
+	// aft lobe is flat within 1.5 dB from 0° to 30° — inside the ±5 dB this
+	// package states within 30° of the axis (Uncertainty). So: 30–50° where
+	// the table peaks there; at lower speeds an aft lobe, its maximum within
+	// 45° of the axis, the 30–50° arc within 1.5 dB of it and at least 5 dB
+	// above 90°, and a peak that never moves outward as the speed falls.
+	type result struct{ vr, peak, angle, arc, at90 float64 }
+	var rs []result
+	for _, vr := range []float64{0.5, 0.6, 0.7, 0.8, 0.9, 0.95, 1.0} {
+		s := mustSource(t, isothermalJet(vr, 0.05))
+		peak, angle := peakOASPL(t, s, 5)
+		arc := math.Inf(-1)
+		for a := 30; a <= 50; a++ {
+			arc = math.Max(arc, mustAt(t, s, Path{Distance: 5, Polar: deg(float64(a)), Lossless: true}).OASPL)
+		}
+		at90 := mustAt(t, s, Path{Distance: 5, Polar: deg(90), Lossless: true}).OASPL
+		rs = append(rs, result{vr, peak, angle, arc, at90})
+	}
+	for i, r := range rs {
+		if r.vr >= 0.9 && (r.angle < 30 || r.angle > 50) {
+			t.Errorf("Uj/c0 = %.2f: got the peak at %.0f° from the jet axis, want 30–50°", r.vr, r.angle)
+		}
+		if r.angle > 45 {
+			t.Errorf("Uj/c0 = %.2f: got the peak at %.0f°, want aft, within 45° of the axis", r.vr, r.angle)
+		}
+		if r.peak-r.arc > 1.5 {
+			t.Errorf("Uj/c0 = %.2f: the 30–50° arc is %.1f dB below the peak, want within 1.5 dB", r.vr, r.peak-r.arc)
+		}
+		if r.arc-r.at90 < 5 {
+			t.Errorf("Uj/c0 = %.2f: the 30–50° arc is only %.1f dB above 90°, want an aft lobe of at least 5 dB", r.vr, r.arc-r.at90)
+		}
+		if i > 0 && r.angle < rs[i-1].angle {
+			t.Errorf("Uj/c0 %.2f → %.2f: the peak moved toward the axis (%.0f° → %.0f°) as the speed rose", rs[i-1].vr, r.vr, rs[i-1].angle, r.angle)
 		}
 	}
 }
