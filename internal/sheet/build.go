@@ -202,12 +202,97 @@ func (b *builder) text(x, y, size float64, bold bool, s string) Text {
 	return Text{X: x, Y: y, Size: size, Bold: bold, Text: clean(s)}
 }
 
-// continuation lays out the sheets after the first: the elevation, the
-// label key (when it did not fit on sheet 1), the set-up steps and the
-// tables.
+// continuation lays out the sheets after the first: the set-out table
+// opens sheet 2, then the set-up steps, the elevation and the clearance
+// view, the details, the label key (when it did not fit on sheet 1), the
+// tables and the warnings that did not fit sheet 1, each filling the space
+// the one before left.
 func (b *builder) continuation() {
 	f := newFlow(b)
+	first := len(b.model.Pages)
+	b.flowSheets(f)
+	// balance the last sheet: when it is less than a third full, raise the
+	// foot of the sheet before so that what runs on fills it better
+	used := b.usedArea(&b.model.Pages[len(b.model.Pages)-1]) / f.area.W
+	if want := f.area.H / 3; f.pages > 1 && used < want {
+		pages := b.model.Pages
+		b.model.Pages = pages[:first:first]
+		g := newFlow(b)
+		g.short, g.raise = f.pages-1, want-used+math.Max(0, f.area.Bottom()-f.ends[f.pages-2])
+		b.flowSheets(g)
+		if g.pages != f.pages {
+			b.model.Pages = pages
+		}
+	}
+}
+
+// usedArea returns the area the tables, views and texts of pg cover, mm²
+// (overlaps counted twice).
+func (b *builder) usedArea(pg *Page) float64 {
+	a := 0.0
+	for i := range pg.Tables {
+		a += pg.Tables[i].W() * pg.Tables[i].H()
+	}
+	for _, v := range pg.Views {
+		a += v.Frame.W * v.Frame.H
+	}
+	for _, t := range pg.Texts {
+		a += b.m.width(t.Text, t.Size, t.Bold) * lineHeight(t.Size)
+	}
+	return a
+}
+
+// flowSheets lays out the sheets after the first on f.
+func (b *builder) flowSheets(f *flow) {
+	// the set-out table opens a sheet of its own
 	f.newPage()
+	f.table(b.setOutTable())
+	f.gap(4)
+	f.columns("SET-UP STEPS (for this plan; positions from the datum)", b.steps())
+	f.gap(3)
+	f.figures(b.sideViews)
+	f.figures(func(g *flow) { g.details(b.details) })
+	if len(b.model.Key) > 0 && !b.keyPlaced {
+		f.figures(func(g *flow) {
+			h := b.keyHeight(g.area.W)
+			b.keyPanel(g.page, Rect{g.area.X, g.y, g.area.W, h})
+			g.y += h
+		})
+	}
+	f.gap(3)
+	f.table(b.stationTable())
+	f.gap(3)
+	f.table(b.arraysTable())
+	f.gap(3)
+	f.table(b.pointsTable())
+	if lt := b.levelTable(); len(lt.rows) > 0 {
+		f.gap(3)
+		f.table(lt)
+	}
+	if len(b.plan.Crew) > 0 {
+		f.gap(3)
+		f.table(b.crewTable())
+	}
+	for _, t := range b.absorptionTables() {
+		f.gap(3)
+		f.table(t)
+	}
+	// the warnings that did not fit sheet 1's panel, each whole
+	if rest := b.safetyFirst()[b.warningsShown:]; len(rest) > 0 {
+		f.gap(3)
+		var ls []textLine
+		for _, w := range rest {
+			ls = append(ls, textLine{text: "• " + w, whole: true})
+		}
+		f.columns("PLANNER WARNINGS (continued from sheet 1)", ls)
+	}
+	f.flush()
+}
+
+// sideViews lays out the elevation and the clearance view on the scratch
+// flow f, side by side when they fit so, each with its title and scale
+// under it.
+func (b *builder) sideViews(f *flow) {
 	sys := b.req.Units
 	// the elevation and the clearance view share the horizontal scale
 	sx := 0
@@ -282,46 +367,5 @@ func (b *builder) continuation() {
 		prevRight = x + tw
 		rowBottom = math.Max(rowBottom, f.y)
 		f.y = rowBottom
-	}
-	f.details(b.details)
-	if len(b.model.Key) > 0 && !b.keyPlaced {
-		h := b.keyHeight(f.area.W)
-		f.ensure(h)
-		b.keyPanel(f.page, Rect{f.area.X, f.y, f.area.W, h})
-		f.y += h + 4
-	}
-	// the set-out table on a sheet of its own
-	f.newPage()
-	f.table(b.setOutTable())
-	f.gap(4)
-	f.heading("SET-UP STEPS (for this plan; positions from the datum)", 20)
-	f.columns(b.steps())
-	f.gap(3)
-	f.table(b.stationTable())
-	f.gap(3)
-	f.table(b.arraysTable())
-	f.gap(3)
-	f.table(b.pointsTable())
-	if lt := b.levelTable(); len(lt.rows) > 0 {
-		f.gap(3)
-		f.table(lt)
-	}
-	if len(b.plan.Crew) > 0 {
-		f.gap(3)
-		f.table(b.crewTable())
-	}
-	for _, t := range b.absorptionTables() {
-		f.gap(3)
-		f.table(t)
-	}
-	// the warnings that did not fit sheet 1's panel
-	if rest := b.safetyFirst()[b.warningsShown:]; len(rest) > 0 {
-		f.gap(3)
-		f.heading("PLANNER WARNINGS (continued from sheet 1)", 10)
-		var ls []textLine
-		for _, w := range rest {
-			ls = append(ls, textLine{text: "• " + w, indent: 0})
-		}
-		f.columns(ls)
 	}
 }

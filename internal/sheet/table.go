@@ -16,6 +16,10 @@ type tableSpec struct {
 	maxW  float64 // largest width, mm; 0: the flow's width
 }
 
+// minLaneRows is the least number of rows a lane of a narrow table holds
+// when the table could end in fewer lanes.
+const minLaneRows = 10
+
 // Table padding, mm.
 const (
 	cellPadX = 1.0
@@ -102,8 +106,11 @@ func splitWords(s string) []string {
 	return out
 }
 
-// table lays t out at the flow's width and places it, splitting it between
-// rows onto as many sheets as it needs; each part repeats the heading.
+// table lays t out at the flow's width and places it, splitting it
+// between rows onto as many sheets as it needs; each part after the first
+// repeats the heading, its title marked continued. A table narrow enough to
+// stand twice across the sheet runs on in lanes side by side when it does
+// not end in the first, its last lanes balanced.
 func (f *flow) table(t tableSpec) {
 	b := f.b
 	sz := sizeTable
@@ -123,9 +130,11 @@ func (f *flow) table(t tableSpec) {
 	ws := b.layoutColumns(&t, w, sz)
 	cols := make([]Column, len(ws))
 	headLines := 1
+	tw := 0.0
 	for i, h := range t.heads {
 		cols[i] = Column{Heading: b.m.wrap(h, ws[i]-2*cellPadX, sz, true), W: ws[i], Right: t.right[i]}
 		headLines = max(headLines, len(cols[i].Heading))
+		tw += ws[i]
 	}
 	headH := float64(headLines)*lh + 2*cellPadY
 	rows := make([]Row, len(t.rows))
@@ -138,39 +147,112 @@ func (f *flow) table(t tableSpec) {
 		}
 		rows[ri] = Row{Cells: cells, H: float64(n)*lh + 2*cellPadY}
 	}
+	lanes := max(1, int((f.area.W+laneGap)/(tw+laneGap)))
+	titleW := f.area.W
+	if lanes > 1 {
+		titleW = tw
+	}
+	title := func(s string) ([]string, float64) {
+		tl := b.m.wrap(s, titleW, sizeBody, true)
+		return tl, float64(len(tl))*lineHeight(sizeBody) + 1
+	}
+	fullTitle, fullH := title(clean(t.title))
+	contTitle, contH := title(clean(shortTitle(t.title)) + " (continued)")
+	laneX := func(k int) float64 { return f.area.X + float64(k)*(tw+laneGap) }
+	// fill lays rows from top into the lanes, each down to limit mm below
+	// top at most, and returns how many rows go in each lane
+	fill := func(rows []Row, top, limit float64, first bool, nl int) []int {
+		var counts []int
+		i := 0
+		for k := 0; k < nl && i < len(rows); k++ {
+			y := top + contH + headH
+			if k == 0 && first {
+				y = top + fullH + headH
+			}
+			bottom := math.Min(f.bottomFor(laneX(k), laneX(k)+tw), top+limit)
+			n := 0
+			for i < len(rows) && y+rows[i].H <= bottom {
+				y += rows[i].H
+				i++
+				n++
+			}
+			if n == 0 {
+				break
+			}
+			counts = append(counts, n)
+		}
+		return counts
+	}
+	sum := func(c []int) int {
+		n := 0
+		for _, v := range c {
+			n += v
+		}
+		return n
+	}
 	first := true
 	for len(rows) > 0 || first {
-		title := clean(t.title)
-		if !first {
-			title += " (continued)"
+		// start a part only where its heading and a few rows fit (one row
+		// for a part that goes on)
+		need, keep := contH+headH, 1
+		if first {
+			need, keep = fullH+headH, 3
 		}
-		tl := b.m.wrap(title, f.area.W, sizeBody, true)
-		titleH := float64(len(tl))*lineHeight(sizeBody) + 1
-		// start a part only where its heading and a few rows fit
-		need := titleH + headH
-		for i := 0; i < min(3, len(rows)); i++ {
+		for i := 0; i < min(keep, len(rows)); i++ {
 			need += rows[i].H
 		}
 		f.ensure(need)
-		part := Table{
-			Name: t.name, Title: strings.Join(tl, "\n"), X: f.area.X, Y: f.y, Size: sz, Line: lh,
-			TitleH: titleH, HeadH: headH, Columns: cols, Continued: !first,
+		top := f.y
+		nolimit := f.b.frame.Bottom() - top
+		counts := fill(rows, top, nolimit, first, 1)
+		if nl := min(lanes, len(rows)/minLaneRows); nl > 1 || (lanes > 1 && sum(counts) < len(rows)) {
+			nl = max(nl, min(lanes, 2))
+			if sum(counts) < len(rows) {
+				nl = lanes
+			}
+			counts = fill(rows, top, nolimit, first, nl)
+			if sum(counts) == len(rows) {
+				// the table ends in these lanes: balance them
+				lo, hi := 0.0, nolimit
+				for hi-lo > 0.2 {
+					mid := (lo + hi) / 2
+					if sum(fill(rows, top, mid, first, nl)) == len(rows) {
+						hi = mid
+					} else {
+						lo = mid
+					}
+				}
+				counts = fill(rows, top, hi, first, nl)
+			}
 		}
-		y := f.y + titleH + headH
-		n := 0
-		bottom := f.bottomFor(part.X, part.X+part.W())
-		for n < len(rows) && y+rows[n].H <= bottom {
-			y += rows[n].H
-			n++
+		if len(counts) == 0 && len(rows) > 0 {
+			if !f.atTop() {
+				f.newPage()
+				continue
+			}
+			counts = []int{1} // a row taller than a sheet: print it anyway
 		}
-		if n == 0 && len(rows) > 0 && f.y == f.area.Y {
-			n = 1 // a row taller than a sheet: print it anyway
-			y += rows[0].H
+		bottom := top
+		for k, n := range counts {
+			tl, th := contTitle, contH
+			if k == 0 && first {
+				tl, th = fullTitle, fullH
+			}
+			part := Table{
+				Name: t.name, Title: strings.Join(tl, "\n"), X: laneX(k), Y: top, Size: sz, Line: lh,
+				TitleH: th, HeadH: headH, Columns: cols, Continued: !(k == 0 && first), Rows: rows[:n],
+			}
+			rows = rows[n:]
+			f.page.Tables = append(f.page.Tables, part)
+			bottom = math.Max(bottom, top+part.H())
 		}
-		part.Rows = rows[:n]
-		rows = rows[n:]
-		f.page.Tables = append(f.page.Tables, part)
-		f.y = y + 2
+		if len(counts) == 0 {
+			// an empty table: its title and heading alone
+			f.page.Tables = append(f.page.Tables, Table{Name: t.name, Title: strings.Join(fullTitle, "\n"), X: f.area.X, Y: top, Size: sz, Line: lh,
+				TitleH: fullH, HeadH: headH, Columns: cols})
+			bottom = top + fullH + headH
+		}
+		f.y = bottom + 2
 		first = false
 		if len(rows) > 0 {
 			f.newPage()

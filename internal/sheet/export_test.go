@@ -1,0 +1,11 @@
+package sheet
+
+// textMeter measures the texts of the tests.
+var textMeter = newMeter()
+
+// TextWidth returns the printed width of t, mm (for the page-flow tests,
+// which measure how full a sheet is from the model).
+func TextWidth(t Text) float64 { return textMeter.width(t.Text, t.Size, t.Bold) }
+
+// LineHeight returns the line height of text of size pt, mm.
+func LineHeight(size float64) float64 { return lineHeight(size) }
