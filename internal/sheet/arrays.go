@@ -248,7 +248,7 @@ func (v *planView) stations() {
 	}
 	for i := range st {
 		v.shapes = append(v.shapes, markShapes(st[i].Status, pts[i], v.markR)...)
-		v.pl.block(rectAround(pts[i], v.markR*1.15))
+		v.pl.mark(rectAround(pts[i], v.markR*1.15))
 	}
 }
 

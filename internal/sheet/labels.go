@@ -200,9 +200,10 @@ func (v *planView) featureLabels() {
 		v.placeText("keep-out: "+k.Name, FeatureLabel, k.Name, sizeSmall, p, Pt{0, -1}, 0, featFar)
 	}
 	if col := c.Collector; col != nil {
+		// beside the end of the inlet's line on its left
 		s, co := math.Sincos(col.Heading)
-		p := v.t.pt(col.Inlet.X, col.Inlet.Y)
-		v.placeText("collector inlet Ø "+pr.dim(col.Diameter), FeatureLabel, "collector", sizeSmall, p, Pt{-s, -co}, v.t.mm(col.Diameter/2)+0.5, featFar)
+		p := v.t.pt(col.Inlet.X-s*col.Diameter/2, col.Inlet.Y+co*col.Diameter/2)
+		v.placeText("collector inlet Ø "+pr.dim(col.Diameter), FeatureLabel, "collector", sizeSmall, p, Pt{-s, -co}, 0.5, featFar)
 	}
 	fr := b.req.Exit
 	e := v.t.pt(fr.Exit.X, fr.Exit.Y)

@@ -75,10 +75,14 @@ func (v *planView) noiseContours() []noiseLabel {
 	return labels
 }
 
+// noiseFar lets a contour or crew label step off the hatch or a crowded
+// spot on a short leader.
+var noiseFar = []float64{3}
+
 // placeNoiseLabels places the contour and crew labels where there is room.
 func (v *planView) placeNoiseLabels(ls []noiseLabel) {
 	for _, l := range ls {
-		if !v.placeText(l.text, FeatureLabel, "noise", sizeSmall, l.anchor, Pt{0, -1}, 1.2, nil) {
+		if !v.placeText(l.text, FeatureLabel, "noise", sizeSmall, l.anchor, Pt{0, -1}, 1.2, noiseFar) {
 			v.notes = append(v.notes, l.text+": no room for its label on the plan.")
 		}
 	}

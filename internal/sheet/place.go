@@ -18,6 +18,10 @@ type placer struct {
 	items  []pitem
 	seen   []uint32
 	gen    uint32
+	// hatch is the raster of the view's hatched regions, nil when none:
+	// a label keeps off it where it can (see find)
+	hatch *hatchMask
+	cands []cand // the far candidates of the label being placed
 }
 
 // pitem is a taken box or a leader segment.
@@ -26,10 +30,22 @@ type pitem struct {
 	a, b  Pt
 	seg   bool
 	label bool // a label box, which leaders must not cross
+	mark  bool // a station's symbol, which another station's label keeps away from
 }
 
 func newPlacer(bounds Rect) *placer {
 	return &placer{bounds: bounds, cell: 4, grid: make(map[[2]int][]int)}
+}
+
+// hatchFrom rasters the hatched regions among shapes (the zones, keep-outs
+// and treatment drawn so far) for the labels placed from now on to keep
+// off.
+func (p *placer) hatchFrom(shapes []Shape) { p.hatch = newHatchMask(p.bounds, shapes) }
+
+// onHatch returns the hatched share (0–1) of label box r with its gap
+// round it.
+func (p *placer) onHatch(r Rect) float64 {
+	return p.hatch.frac(Rect{r.X - labelGap, r.Y - labelGap, r.W + 2*labelGap, r.H + 2*labelGap})
 }
 
 func (p *placer) cellRange(r Rect) (int, int, int, int) {
@@ -52,6 +68,9 @@ func (p *placer) insert(it pitem, r Rect) {
 
 // block marks r as taken by a mark or symbol.
 func (p *placer) block(r Rect) { p.insert(pitem{r: r}, r) }
+
+// mark marks r as taken by a station's symbol.
+func (p *placer) mark(r Rect) { p.insert(pitem{r: r, mark: true}, r) }
 
 // take marks r as taken by a label.
 func (p *placer) take(r Rect) { p.insert(pitem{r: r, label: true}, r) }
@@ -96,11 +115,31 @@ func (p *placer) free(r Rect) bool {
 	})
 }
 
-// clearPath reports whether a leader from a to b crosses no taken box.
+// clearPath reports whether a leader from a to b crosses no taken box but
+// those that hold a (the mark the leader leaves).
 func (p *placer) clearPath(a, b Pt) bool {
 	return p.visit(boundOf([]Pt{a, b}), func(it *pitem) bool {
-		return it.seg || !segHitsRect(a, b, it.r, 0.05)
+		if it.seg || it.r.X < a.X && a.X < it.r.Right() && it.r.Y < a.Y && a.Y < it.r.Bottom() {
+			return true
+		}
+		return !segHitsRect(a, b, it.r, 0.05)
 	})
+}
+
+// nearerMark reports whether the symbol of a station other than the one
+// at anchor lies nearer than gap (mm) to box r: a label there would seem
+// to name that station.
+func (p *placer) nearerMark(r Rect, anchor Pt, gap float64) bool {
+	found := false
+	p.visit(Rect{r.X - gap, r.Y - gap, r.W + 2*gap, r.H + 2*gap}, func(it *pitem) bool {
+		if !it.mark || it.r.X <= anchor.X && anchor.X <= it.r.Right() && it.r.Y <= anchor.Y && anchor.Y <= it.r.Bottom() {
+			return true
+		}
+		c := Pt{it.r.X + it.r.W/2, it.r.Y + it.r.H/2}
+		found = dist(rectEdgePoint(r, c), c) < gap
+		return !found
+	})
+	return found
 }
 
 // want describes a label to place: its size, the point it labels, the
@@ -121,53 +160,207 @@ type spot struct {
 	to     Pt // leader end, on the box's edge
 }
 
-// Candidate directions around the preferred one, radians, best first.
-var (
-	nearTurns = []float64{0, 0.6, -0.6, 1.2, -1.2, 1.75, -1.75, 2.35, -2.35, math.Pi}
-	farTurns  = []float64{0, 0.3, -0.3, 0.6, -0.6, 0.9, -0.9, 1.3, -1.3, 1.75, -1.75, 2.35, -2.35, math.Pi}
+// nearTurns are the directions tried beside the mark, radians from the
+// preferred one, best first.
+var nearTurns = []float64{0, 0.6, -0.6, 1.2, -1.2, 1.75, -1.75, 2.35, -2.35, math.Pi}
+
+// The costs by which find chooses among the free spots, in mm of leader.
+const (
+	// nearGapMM is the clear space left between a mark's clear radius and
+	// a label beside it (no leader), mm.
+	nearGapMM = 0.4
+	// turnCost is the cost of a radian turned away from the preferred
+	// direction.
+	turnCost = 1.5
+	// leaderCost is the cost of a leader: more than the worst spot beside
+	// the mark (nearGapMM + turnCost·π), so that a label goes on a leader
+	// only where no spot beside its mark is free and off the hatch.
+	leaderCost = 6
+	// hatchReach is how far (mm beyond the mark's clear radius) a label
+	// with a leader looks for a spot off the hatch, whatever its far list
+	// says.
+	hatchReach = 10
+	// hatchCost is the cost of a label on the hatch, plus hatchShare times
+	// the hatched share of its box: more than any leader within
+	// hatchReach, so that a clear spot within reach is always taken first,
+	// but less than a long one: a label beside its mark on the hatch is
+	// better than one far away on a leader.
+	hatchCost  = leaderCost + hatchReach + turnCost*math.Pi + strayCost + 1
+	hatchShare = 20
+	// strayCost is the cost of a label on a leader that lies nearer to
+	// another station's symbol than to its own mark.
+	strayCost = 8
+	// farStep is the spacing of the spots tried on a leader, mm, within
+	// hatchReach; twice that out to twice the reach, four times beyond.
+	farStep = 1.0
 )
 
-// find returns the first free spot for w: beside the mark at distance 0
-// first (no leader), then further out with a leader at each distance of
-// far (mm), trying directions around the preferred one. It does not take
-// the spot.
-func (p *placer) find(w want, far []float64) (spot, bool) {
-	try := func(turn, d float64, leader bool) (spot, bool) {
-		v := rot(w.dir, turn)
-		q := add(w.anchor, mul(v, w.clear+d))
-		// hang the box from q in direction v: scaling v to unit max-norm puts
-		// the box's near edge (or corner) at q
-		m := math.Max(math.Abs(v.X), math.Abs(v.Y))
-		c := Pt{q.X + v.X/m*w.w/2, q.Y + v.Y/m*w.h/2}
-		box := Rect{c.X - w.w/2, c.Y - w.h/2, w.w, w.h}
-		if !p.free(box) {
-			return spot{}, false
-		}
-		s := spot{box: box}
-		if leader {
-			s.leader = true
-			s.from = add(w.anchor, mul(v, w.clear*1.15))
-			s.to = rectEdgePoint(box, s.from)
-			if !p.clearPath(s.from, s.to) {
-				return spot{}, false
-			}
-		}
-		return s, true
-	}
-	for _, t := range nearTurns {
-		if s, ok := try(t, 0.4, false); ok {
-			return s, true
-		}
-	}
-	for _, d := range far {
-		for _, t := range farTurns {
-			if s, ok := try(t, d, true); ok {
-				return s, true
-			}
-		}
-	}
-	return spot{}, false
+// cand is a spot tried on a leader: the box's centre offset from the
+// anchor, mm, and its cost before the hatch.
+type cand struct {
+	off  Pt
+	cost float64
+	ord  int // lattice order, which breaks ties
 }
+
+// less orders candidates by cost, then by lattice order.
+func (c cand) less(o cand) bool { return c.cost < o.cost || c.cost == o.cost && c.ord < o.ord }
+
+// siftDown restores the min-heap h below i.
+func siftDown(h []cand, i int) {
+	for {
+		l := 2*i + 1
+		if l >= len(h) {
+			return
+		}
+		m := l
+		if r := l + 1; r < len(h) && h[r].less(h[l]) {
+			m = r
+		}
+		if !h[m].less(h[i]) {
+			return
+		}
+		h[i], h[m] = h[m], h[i]
+		i = m
+	}
+}
+
+// popCand removes the cheapest candidate h[0] from the heap h.
+func popCand(h []cand) []cand {
+	n := len(h) - 1
+	h[0] = h[n]
+	h = h[:n]
+	siftDown(h, 0)
+	return h
+}
+
+// find returns the best free spot for w, the one of least cost: beside the
+// mark first (no leader), in the directions of nearTurns; then, when far
+// is not empty, on a leader anywhere within the farthest distance of far
+// or hatchReach, whichever is larger (mm beyond the mark's clear radius),
+// on a lattice of farStep, dearer with distance and with the turn from the
+// preferred direction. A spot on the hatch is taken only when no free spot
+// within reach is clear of it, and never without a leader list (a label
+// that may not move away from its mark stays off the hatch or is left
+// out). The choice is deterministic. It does not take the spot.
+func (p *placer) find(w want, far []float64) (spot, bool) {
+	best, bestCost := spot{}, math.Inf(1)
+	for _, t := range nearTurns {
+		base := nearGapMM + turnCost*math.Abs(t)
+		if base >= bestCost {
+			break
+		}
+		v := rot(w.dir, t)
+		box := hang(w, add(w.anchor, mul(v, w.clear+nearGapMM)), v)
+		if !p.free(box) {
+			continue
+		}
+		cost := base
+		if h := p.onHatch(box); h > 0 {
+			if len(far) == 0 {
+				continue
+			}
+			cost += hatchCost + hatchShare*h
+		}
+		if cost < bestCost {
+			best, bestCost = spot{box: box}, cost
+		}
+	}
+	if len(far) == 0 || bestCost < leaderCost {
+		return best, !math.IsInf(bestCost, 1)
+	}
+	reach := float64(hatchReach)
+	for _, d := range far {
+		reach = math.Max(reach, d)
+	}
+	cs := p.farCands(w, reach)
+	for len(cs) > 0 {
+		c := cs[0]
+		cs = popCand(cs)
+		if c.cost >= bestCost {
+			break
+		}
+		ctr := add(w.anchor, c.off)
+		box := Rect{ctr.X - w.w/2, ctr.Y - w.h/2, w.w, w.h}
+		cost := c.cost
+		if h := p.onHatch(box); h > 0 {
+			cost += hatchCost + hatchShare*h
+			if cost >= bestCost {
+				continue
+			}
+		}
+		if !p.free(box) {
+			continue
+		}
+		near := rectEdgePoint(box, w.anchor)
+		v := unit(sub(near, w.anchor), w.dir)
+		s := spot{box: box, leader: true, from: add(w.anchor, mul(v, w.clear*1.15))}
+		s.to = rectEdgePoint(box, s.from)
+		if !p.clearPath(s.from, s.to) {
+			continue
+		}
+		if p.nearerMark(box, w.anchor, dist(near, w.anchor)) {
+			if cost += strayCost; cost >= bestCost {
+				continue
+			}
+		}
+		best, bestCost = s, cost
+	}
+	return best, !math.IsInf(bestCost, 1)
+}
+
+// hang returns the box of w hung from q in direction v: scaling v to unit
+// max-norm puts the box's near edge (or corner) at q.
+func hang(w want, q, v Pt) Rect {
+	m := math.Max(math.Abs(v.X), math.Abs(v.Y))
+	c := Pt{q.X + v.X/m*w.w/2, q.Y + v.Y/m*w.h/2}
+	return Rect{c.X - w.w/2, c.Y - w.h/2, w.w, w.h}
+}
+
+// farCands returns the spots on a leader to try for w, as a min-heap by
+// cost (popCand takes the cheapest):
+// box centres on a lattice about the anchor (farStep apart within
+// hatchReach, coarser beyond) whose box lies more than nearGapMM·2.5
+// beyond the mark's clear radius and at most reach beyond it. The cost is
+// leaderCost plus the gap and the turn from the preferred direction; ties
+// go by lattice order, so the order is the same on every run.
+func (p *placer) farCands(w want, reach float64) []cand {
+	out := p.cands[:0]
+	ext := w.clear + reach
+	nx, ny := int(math.Ceil((ext+w.w/2)/farStep)), int(math.Ceil((ext+w.h/2)/farStep))
+	for j := -ny; j <= ny; j++ {
+		for i := -nx; i <= nx; i++ {
+			off := Pt{float64(i) * farStep, float64(j) * farStep}
+			// the gap from the anchor to the box
+			gx := math.Max(0, math.Abs(off.X)-w.w/2)
+			gy := math.Max(0, math.Abs(off.Y)-w.h/2)
+			g := math.Hypot(gx, gy) - w.clear
+			if g <= 2.5*nearGapMM || g > reach {
+				continue
+			}
+			switch {
+			case g > 2*hatchReach:
+				if i%4 != 0 || j%4 != 0 {
+					continue
+				}
+			case g > hatchReach:
+				if i%2 != 0 || j%2 != 0 {
+					continue
+				}
+			}
+			turn := math.Acos(math.Max(-1, math.Min(1, dot(unit(off, w.dir), w.dir))))
+			out = append(out, cand{off: off, cost: leaderCost + g + turnCost*turn, ord: len(out)})
+		}
+	}
+	for i := len(out)/2 - 1; i >= 0; i-- {
+		siftDown(out, i)
+	}
+	p.cands = out
+	return out
+}
+
+// dot returns the dot product of a and b.
+func dot(a, b Pt) float64 { return a.X*b.X + a.Y*b.Y }
 
 // commit takes the spot s.
 func (p *placer) commit(s spot) {

@@ -116,6 +116,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.datum()
 	v.reference()
 	v.hazardMarks()
+	v.pl.hatchFrom(v.shapes)
 	v.placeLabels(z)
 	v.placeNoiseLabels(noise)
 	b.details = v.findDetails()

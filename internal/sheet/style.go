@@ -75,17 +75,20 @@ type StyleDef struct {
 }
 
 var (
-	black     = RGB{0, 0, 0}
-	white     = RGB{255, 255, 255}
-	gridGrey  = RGB{205, 205, 205}
-	midGrey   = RGB{120, 120, 120}
-	lightFill = RGB{228, 228, 228}
-	coreFill  = RGB{150, 150, 150}
-	velBlue   = RGB{30, 80, 170}
-	hotRed    = RGB{190, 45, 20}
-	keepPlum  = RGB{110, 50, 120}
-	arrayTeal = RGB{0, 110, 100}
-	headFill  = RGB{235, 235, 235}
+	black    = RGB{0, 0, 0}
+	white    = RGB{255, 255, 255}
+	gridGrey = RGB{205, 205, 205}
+	midGrey  = RGB{120, 120, 120}
+	// leaderGrey is dark enough that a thin leader still shows on a grey
+	// print
+	leaderGrey = RGB{60, 60, 60}
+	lightFill  = RGB{228, 228, 228}
+	coreFill   = RGB{150, 150, 150}
+	velBlue    = RGB{30, 80, 170}
+	hotRed     = RGB{190, 45, 20}
+	keepPlum   = RGB{110, 50, 120}
+	arrayTeal  = RGB{0, 110, 100}
+	headFill   = RGB{235, 235, 235}
 	// safetyOrange approximates the safety orange of ANSI Z535.1, the
 	// colour of the WARNING signal word panel (FROM MEMORY)
 	safetyOrange = RGB{245, 120, 20}
@@ -122,7 +125,7 @@ var styles = map[Style]StyleDef{
 	StyleArray:      {Pen: Pen{Width: 0.2, Color: arrayTeal}},
 	StyleTick:       {Pen: Pen{Width: 0.2, Color: black}},
 	StyleDim:        {Pen: Pen{Width: 0.15, Color: black}},
-	StyleLeader:     {Pen: Pen{Width: 0.1, Color: midGrey}},
+	StyleLeader:     {Pen: Pen{Width: 0.15, Color: leaderGrey}},
 	StyleMark:       {Pen: Pen{Width: 0.25, Color: black}, Fill: fill(white)},
 	StyleStrike:     {Pen: Pen{Width: 0.5, Color: black}},
 	StyleBase:       {Pen: Pen{Width: 0.15, Color: black}},
