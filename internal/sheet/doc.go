@@ -62,6 +62,13 @@
 // of one array; and the few left are listed in the notes as unlabelled
 // (their positions are in the station table).
 //
+// Every label of the plan and the details keeps off the hatched regions
+// (the zones, keep-outs and treatment) where a spot within about 10 mm of
+// its mark is clear: the placer scores the free spots by distance, turn
+// from the preferred side, hatch and nearness to another station's symbol,
+// and a label away from its mark gets a leader. A label that may not move
+// (an arc's angle) is left out rather than laid on the hatch.
+//
 // # Page coordinates
 //
 // Page coordinates are millimetres from the top-left corner of the sheet,
