@@ -211,19 +211,30 @@ func (b *builder) continuation() {
 	f := newFlow(b)
 	first := len(b.model.Pages)
 	b.flowSheets(f)
-	// balance the last sheet: when it is less than a third full, raise the
-	// foot of the sheet before so that what runs on fills it better
-	used := b.usedArea(&b.model.Pages[len(b.model.Pages)-1]) / f.area.W
-	if want := f.area.H / 3; f.pages > 1 && used < want {
-		pages := b.model.Pages
-		b.model.Pages = pages[:first:first]
+	// balance the last sheet: when it is less than 40 % full, raise the
+	// foot of the sheet before by a tenth of a sheet, two tenths, … half a
+	// sheet, so that more runs on to the last, and keep the layout whose
+	// emptier sheet of the two is fullest (on as many sheets)
+	n := f.pages
+	area := f.area.W * f.area.H
+	if n < 2 || b.usedArea(&b.model.Pages[len(b.model.Pages)-1]) >= 0.4*area {
+		return
+	}
+	score := func(pages []Page) float64 {
+		return math.Min(b.usedArea(&pages[len(pages)-2]), b.usedArea(&pages[len(pages)-1]))
+	}
+	best := b.model.Pages
+	top := score(best)
+	for k := 1; k <= 5; k++ {
+		b.model.Pages = best[:first:first]
 		g := newFlow(b)
-		g.short, g.raise = f.pages-1, want-used+math.Max(0, f.area.Bottom()-f.ends[f.pages-2])
+		g.short, g.foot = n-1, f.ends[n-2]-float64(k)*0.1*f.area.H
 		b.flowSheets(g)
-		if g.pages != f.pages {
-			b.model.Pages = pages
+		if s := score(b.model.Pages); g.pages == n && s > top {
+			best, top = b.model.Pages, s
 		}
 	}
+	b.model.Pages = best
 }
 
 // usedArea returns the area the tables, views and texts of pg cover, mm²

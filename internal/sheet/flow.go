@@ -25,10 +25,10 @@ type flow struct {
 	// that lays figures out before they are placed)
 	sink *[]Page
 	// pages counts the sheets this flow started; short is the number of
-	// the sheet (1 for the first) whose foot is raised by raise mm, to
-	// balance the last sheet
+	// the sheet (1 for the first) whose content ends at foot (y, mm) at
+	// the lowest, to balance the last sheet
 	pages, short int
-	raise        float64
+	foot         float64
 	// ends are the y where each sheet's content ended, mm
 	ends []float64
 }
@@ -58,18 +58,20 @@ func (f *flow) scratch() *flow {
 // bottomFor returns the lowest y a block spanning x0 to x1 (mm) may reach:
 // the frame's foot beside the title block, else the top of its band.
 func (f *flow) bottomFor(x0, x1 float64) float64 {
-	if x1 <= f.b.frame.Right()-f.b.colW-gapMM {
-		return f.b.frame.Bottom() - 3 - f.raised()
+	y := f.foot0(x0, x1)
+	if f.pages == f.short {
+		y = math.Min(y, f.foot)
 	}
-	return f.area.Bottom() - f.raised()
+	return y
 }
 
-// raised returns how far the foot of the current sheet is raised, mm.
-func (f *flow) raised() float64 {
-	if f.pages == f.short {
-		return f.raise
+// foot0 is bottomFor on a sheet whose foot is not raised to balance the
+// last sheet: figures are placed against it.
+func (f *flow) foot0(x0, x1 float64) float64 {
+	if x1 <= f.b.frame.Right()-f.b.colW-gapMM {
+		return f.b.frame.Bottom() - 3
 	}
-	return 0
+	return f.area.Bottom()
 }
 
 // newPage starts a sheet and places on it the figures waiting, as many as
@@ -101,7 +103,7 @@ func (f *flow) room() float64 {
 	if f.page == nil {
 		return 0
 	}
-	return f.area.Bottom() - f.raised() - f.y
+	return f.bottomFor(f.area.X, f.area.Right()) - f.y
 }
 
 // ensure starts new sheets until h mm are left on one, or one is empty.
@@ -143,7 +145,7 @@ type block struct {
 
 // fits reports whether bl fits in the space left on the current sheet.
 func (f *flow) fits(bl *block) bool {
-	return f.y+bl.h <= f.bottomFor(bl.x0, bl.x1)
+	return f.y+bl.h <= f.foot0(bl.x0, bl.x1)
 }
 
 // float places bl where the flow is when it fits there and no figure

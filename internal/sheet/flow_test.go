@@ -25,14 +25,22 @@ import (
 // cover, unless no flow could use fewer sheets (the brief's "say, 25 %").
 const minFill = 0.25
 
-// lastFill is the least share of the last sheet that the flow reaches on
-// every case today (the goal is minFill: see the report of issue 9).
-const lastFill = 0.05
-
-// sheetSlack is how many sheets over the lower bound (the content's area
-// over a sheet's) the flow may use today: 3 for the 500-station pad and the
-// pad on A4, 2 for the demos; the goal is 1.
-const sheetSlack = 3
+// short lists the cases where the flow does not reach the goal yet (at
+// most one sheet over the lower bound, the last sheet at least minFill
+// full), with what it reaches: sheets over the bound and the last sheet's
+// least share. The bound counts ink, not the white inside text columns and
+// beside narrow figures, so some of this is the bound's slack.
+var short = map[string]struct {
+	slack int
+	last  float64
+}{
+	"anechoic-model-jet":    {2, minFill},
+	"anechoic-model-jet/A4": {2, minFill},
+	"outdoor-static-pad/A4": {3, 0.12},
+	"few stations":          {1, 0.12},
+	"500 stations":          {3, minFill},
+	"many warnings/A4":      {2, minFill},
+}
 
 // flowSlack is the spacing the flow keeps between blocks, mm: free space
 // smaller than a block plus this slack cannot hold it.
@@ -294,11 +302,12 @@ func TestFlowFillsTheSheets(t *testing.T) {
 			for i, f := range fills[1:] {
 				report = append(report, fmt.Sprintf("%d: %.0f %%", i+2, 100*f.share()))
 			}
-			// the goal is bound+1 and a last sheet at least minFill full;
-			// what the flow reaches today is checked (see lastFill and
-			// sheetSlack)
-			if n > bound+sheetSlack {
-				t.Errorf("got %d sheets after the plan, want at most %d (the content covers %.2f sheets); fills %s", n, bound+sheetSlack, used/capacity, strings.Join(report, ", "))
+			slack, lastFill := 1, minFill
+			if sh, ok := short[c.name]; ok {
+				slack, lastFill = sh.slack, sh.last
+			}
+			if n > bound+slack {
+				t.Errorf("got %d sheets after the plan, want at most %d (the content covers %.2f sheets); fills %s", n, bound+slack, used/capacity, strings.Join(report, ", "))
 			}
 			for i := 1; i < len(m.Pages); i++ {
 				last := i == len(m.Pages)-1
@@ -315,8 +324,8 @@ func TestFlowFillsTheSheets(t *testing.T) {
 			}
 			// free space at a sheet's foot is left only for what does not fit
 			for i := 1; i < len(m.Pages)-1; i++ {
-				if i == len(m.Pages)-2 && fills[i+1].share() < 0.5 {
-					continue // the foot of the sheet before the last is left free to balance the last
+				if i == len(m.Pages)-2 {
+					continue // the foot of the sheet before the last may be raised to balance the last
 				}
 				next := &m.Pages[i+1]
 				it := top(next)
@@ -346,7 +355,9 @@ func TestFlowFillsTheSheets(t *testing.T) {
 						order = append(order, tb.Name)
 						continue
 					}
-					if !tb.Continued || !strings.Contains(tb.Title, "(continued)") {
+					if tb.Title == "" && tb.Continued && beside(&m.Pages[pi], tb) {
+						// a lane beside a titled part of the table: its heading only
+					} else if !tb.Continued || !strings.Contains(tb.Title, "(continued)") {
 						t.Errorf("sheet %d: a later part of the %s table is not marked continued (title %q)", pi+1, tb.Name, clip(tb.Title))
 					}
 					if fmt.Sprint(tb.Columns) != fmt.Sprint(f.Columns) {
@@ -409,6 +420,18 @@ func checkWarnings(t *testing.T, m *sheet.Model) {
 		}
 		started = started || headY < math.Inf(1)
 	}
+}
+
+// beside reports whether tb stands beside a titled part of its table on
+// pg, its heading level with that part's.
+func beside(pg *sheet.Page, tb *sheet.Table) bool {
+	for i := range pg.Tables {
+		o := &pg.Tables[i]
+		if o.Name == tb.Name && o.Title != "" && math.Abs(o.Y+o.TitleH-tb.Y) < 0.01 && o.X < tb.X {
+			return true
+		}
+	}
+	return false
 }
 
 // clip shortens s for a message.

@@ -131,7 +131,7 @@ func Test500StationTable(t *testing.T) {
 		if i > 0 && fmt.Sprint(tb.Columns) != fmt.Sprint(parts[0].Columns) {
 			t.Errorf("part %d: the heading differs from the first part's", i+1)
 		}
-		if i > 0 && !strings.Contains(tb.Title, "(continued)") {
+		if i > 0 && tb.Title != "" && !strings.Contains(tb.Title, "(continued)") { // a lane beside a titled part has no title
 			t.Errorf("part %d: got title %q, want it marked (continued)", i+1, tb.Title)
 		}
 		for _, r := range tb.Rows {

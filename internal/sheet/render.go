@@ -210,6 +210,9 @@ func (r *renderer) text(t Text) {
 // alternate shading, and the rules.
 func (r *renderer) table(t *Table) {
 	for i, l := range strings.Split(t.Title, "\n") {
+		if l == "" {
+			continue // a lane beside the first part has no title
+		}
 		r.text(Text{X: t.X, Y: t.Y + capHeight(sizeBody) + 0.3 + float64(i)*lineHeight(sizeBody), Size: sizeBody, Bold: true, Text: l})
 	}
 	w := t.W()

@@ -109,8 +109,9 @@ func splitWords(s string) []string {
 // table lays t out at the flow's width and places it, splitting it
 // between rows onto as many sheets as it needs; each part after the first
 // repeats the heading, its title marked continued. A table narrow enough to
-// stand twice across the sheet runs on in lanes side by side when it does
-// not end in the first, its last lanes balanced.
+// stand twice across the sheet runs on in lanes side by side under its
+// title (each lane with the heading) when it does not end in the first, or
+// is long, its last lanes balanced.
 func (f *flow) table(t tableSpec) {
 	b := f.b
 	sz := sizeTable
@@ -148,12 +149,8 @@ func (f *flow) table(t tableSpec) {
 		rows[ri] = Row{Cells: cells, H: float64(n)*lh + 2*cellPadY}
 	}
 	lanes := max(1, int((f.area.W+laneGap)/(tw+laneGap)))
-	titleW := f.area.W
-	if lanes > 1 {
-		titleW = tw
-	}
 	title := func(s string) ([]string, float64) {
-		tl := b.m.wrap(s, titleW, sizeBody, true)
+		tl := b.m.wrap(s, f.area.W, sizeBody, true)
 		return tl, float64(len(tl))*lineHeight(sizeBody) + 1
 	}
 	fullTitle, fullH := title(clean(t.title))
@@ -164,11 +161,14 @@ func (f *flow) table(t tableSpec) {
 	fill := func(rows []Row, top, limit float64, first bool, nl int) []int {
 		var counts []int
 		i := 0
+		// the title spans the lanes; the lanes after the first carry the
+		// heading alone
+		y0 := top + contH
+		if first {
+			y0 = top + fullH
+		}
 		for k := 0; k < nl && i < len(rows); k++ {
-			y := top + contH + headH
-			if k == 0 && first {
-				y = top + fullH + headH
-			}
+			y := y0 + headH
 			bottom := math.Min(f.bottomFor(laneX(k), laneX(k)+tw), top+limit)
 			n := 0
 			for i < len(rows) && y+rows[i].H <= bottom {
@@ -235,16 +235,20 @@ func (f *flow) table(t tableSpec) {
 		bottom := top
 		for k, n := range counts {
 			tl, th := contTitle, contH
-			if k == 0 && first {
+			if first {
 				tl, th = fullTitle, fullH
 			}
+			y := top
+			if k > 0 {
+				y, tl, th = top+th, nil, 0
+			}
 			part := Table{
-				Name: t.name, Title: strings.Join(tl, "\n"), X: laneX(k), Y: top, Size: sz, Line: lh,
+				Name: t.name, Title: strings.Join(tl, "\n"), X: laneX(k), Y: y, Size: sz, Line: lh,
 				TitleH: th, HeadH: headH, Columns: cols, Continued: !(k == 0 && first), Rows: rows[:n],
 			}
 			rows = rows[n:]
 			f.page.Tables = append(f.page.Tables, part)
-			bottom = math.Max(bottom, top+part.H())
+			bottom = math.Max(bottom, y+part.H())
 		}
 		if len(counts) == 0 {
 			// an empty table: its title and heading alone
