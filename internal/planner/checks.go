@@ -126,7 +126,8 @@ type checker struct {
 	bands     []acoustics.Band
 	obstacles *geometry.Index
 	stands    *geometry.Index
-	feet      []foot // stand footprints, by station index
+	feet      []foot     // stand footprints, by station index
+	spread    *standTree // the footprints, for the spacing check
 	sources   []r3.Vec
 	srcPoint  string // the point whose source region is longest
 	maxFoot   float64
@@ -439,56 +440,6 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		ck.levelCheck(st, arr, t)
 	}
 	ck.finish(st, t)
-}
-
-// spacing checks the gap to the nearest other stand and counts the stands
-// that overlap this one (or come closer than the layout asks), so that a
-// crowd of stands gives one short reason, not a list.
-func (ck *checker) spacing(st *Station, i int) Check {
-	me := ck.feet[i]
-	best, who := math.Inf(1), -1
-	overlaps, close := 0, 0
-	var near []int
-	near = ck.stands.AppendNear(near[:0], me.at, me.r+ck.maxFoot+ck.lim.StandSpacing)
-	for _, j := range near {
-		if j == i {
-			continue
-		}
-		o := ck.feet[j]
-		g := math.Hypot(o.at[0]-me.at[0], o.at[1]-me.at[1]) - me.r - o.r
-		if g < best {
-			best, who = g, j
-		}
-		switch {
-		case g < 0:
-			overlaps++
-		case g < ck.lim.StandSpacing:
-			close++
-		}
-	}
-	c := Check{Name: CheckSpacing, Value: best, Unit: "m", Verdict: OK}
-	if who < 0 {
-		c.Reason = fmt.Sprintf("no other stand within %s", ck.m(ck.lim.StandSpacing))
-		return c
-	}
-	other := ck.stands.Solid(who).Name
-	switch {
-	case overlaps > 1:
-		c.Verdict = Blocked
-		c.Reason = fmt.Sprintf("overlaps %d other stands, the stand of %s most, by %s", overlaps, other, ck.m(-best))
-	case best < 0:
-		c.Verdict = Blocked
-		c.Reason = fmt.Sprintf("overlaps the stand of %s by %s", other, ck.m(-best))
-	case close > 1:
-		c.Verdict = Warn
-		c.Reason = fmt.Sprintf("%d other stands closer than the %s the layout asks, the stand of %s nearest, at %s", close, ck.m(ck.lim.StandSpacing), other, ck.m(best))
-	case best < ck.lim.StandSpacing:
-		c.Verdict = Warn
-		c.Reason = fmt.Sprintf("%s from the stand of %s; the layout asks %s", ck.m(best), other, ck.m(ck.lim.StandSpacing))
-	default:
-		c.Reason = fmt.Sprintf("%s from the stand of %s", ck.m(best), other)
-	}
-	return c
 }
 
 // sightNames is the number of blockers a sight-line reason names; more are

@@ -302,6 +302,7 @@ func (ck *checker) indexSolids(stations []Station) {
 	ck.obstacles = geometry.NewIndex(obst)
 	stands := make([]geometry.Solid, len(stations))
 	ck.feet = make([]foot, len(stations))
+	sight := make([]float64, len(stations))
 	for i := range stations {
 		st := &stations[i]
 		r, top := flushRadius, math.Max(st.Mic.Z, flushHeight)
@@ -314,9 +315,11 @@ func (ck *checker) indexSolids(stations []Station) {
 		if st.Stand != nil {
 			sr = st.Stand.PoleDiameter / 2
 		}
+		sight[i] = sr
 		stands[i] = geometry.Solid{Name: st.ID, Footprint: geometry.Circle(st.Base, sr), ZMin: 0, ZMax: top}
 	}
 	ck.stands = geometry.NewIndex(stands)
+	ck.spread = newStandTree(ck.feet, sight)
 }
 
 // checkStations runs every check on every station and counts the verdicts.
