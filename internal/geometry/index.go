@@ -12,6 +12,14 @@ import (
 // maxGridSide caps the number of grid cells along each axis of an [Index].
 const maxGridSide = 1024
 
+// maxCellsPerSolid caps the average number of grid cells an [Index] lists
+// each solid in. About one grid cell per solid is right for solids smaller
+// than the gaps between them; in a crowd of solids that overlap one another
+// that grid is finer than the solids, and each would be listed in a number
+// of grid cells that grows with the crowd (20,000 poles piled on one spot:
+// 400 million entries). The grid is coarsened until the cap holds.
+const maxCellsPerSolid = 16
+
 // indexPad is how far, m, each solid's plan bound and each query are widened
 // before they are placed on the grid, so that a solid within BoundaryTol of a
 // query is always among the candidates despite rounding.
@@ -68,13 +76,35 @@ func NewIndex(solids []Solid) *Index {
 	return ix
 }
 
-// sizeGrid chooses about n square grid cells over the grid bound.
+// sizeGrid chooses about n square grid cells over the grid bound, or
+// fewer, larger ones when the solids would otherwise be listed in more than
+// maxCellsPerSolid grid cells each on average.
 func (ix *Index) sizeGrid(n int) {
 	w, h := ix.grid.Max[0]-ix.grid.Min[0], ix.grid.Max[1]-ix.grid.Min[1]
 	side := math.Sqrt(w * h / float64(n))
 	if !(side > 0) {
 		side = math.Max(w, h) / float64(n)
 	}
+	ix.setSide(side)
+	for (ix.nx > 1 || ix.ny > 1) && ix.listed() > maxCellsPerSolid*n {
+		side *= 2
+		ix.setSide(side)
+	}
+}
+
+// listed returns how many grid cells the solids' bounds overlap in all.
+func (ix *Index) listed() int {
+	k := 0
+	for _, b := range ix.bounds {
+		k += (ix.col(b.Max[0]) - ix.col(b.Min[0]) + 1) * (ix.row(b.Max[1]) - ix.row(b.Min[1]) + 1)
+	}
+	return k
+}
+
+// setSide sets the grid to square cells of about side m.
+func (ix *Index) setSide(side float64) {
+	w, h := ix.grid.Max[0]-ix.grid.Min[0], ix.grid.Max[1]-ix.grid.Min[1]
+	ix.nx, ix.ny, ix.sx, ix.sy = 1, 1, 1, 1
 	if side > 0 {
 		ix.nx = min(maxGridSide, max(1, int(math.Ceil(w/side))))
 		ix.ny = min(maxGridSide, max(1, int(math.Ceil(h/side))))

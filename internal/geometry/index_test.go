@@ -226,3 +226,37 @@ func TestAppendFirstSegmentHits(t *testing.T) {
 		}
 	}
 }
+
+// TestIndexCrowd: solids that all overlap one another (poles 20 mm across
+// piled within 0.4 mm, or spread over 0.3 m, as an as-built file in the
+// wrong unit or a pasted block of stations gives) are listed in a number of
+// grid cells that grows linearly with the crowd, not as its square, and the
+// queries still match brute force.
+func TestIndexCrowd(t *testing.T) {
+	rng := rand.New(rand.NewPCG(51, 52))
+	for _, tc := range []struct {
+		n      int
+		spread float64
+	}{{2000, 0.0004}, {2000, 0.3}, {300, 0}} {
+		solids := make([]Solid, tc.n)
+		for i := range solids {
+			c := orb.Point{3 + tc.spread*rng.Float64(), 2 + tc.spread*rng.Float64()}
+			solids[i] = Solid{Footprint: Circle(c, 0.01), ZMax: 1.5}
+		}
+		ix := NewIndex(solids)
+		if len(ix.items) > maxCellsPerSolid*tc.n {
+			t.Errorf("%d poles over %g m: listed %d times, want at most %d", tc.n, tc.spread, len(ix.items), maxCellsPerSolid*tc.n)
+		}
+		for range 200 {
+			a := r3.Vec{X: 3 - 0.2 + 0.8*rng.Float64(), Y: 2 - 0.2 + 0.8*rng.Float64(), Z: 2 * rng.Float64()}
+			b := r3.Vec{X: 10 * rng.Float64(), Y: 10 * rng.Float64(), Z: 2 * rng.Float64()}
+			if got, want := ix.AppendSegmentHits(nil, a, b), bruteSegmentHits(solids, a, b); !slices.Equal(got, want) {
+				t.Fatalf("%d poles over %g m, segment %v-%v: got %d hits, want %d", tc.n, tc.spread, a, b, len(got), len(want))
+			}
+			p, r := orb.Point{a.X, a.Y}, 0.3*rng.Float64()
+			if got, want := ix.AppendNear(nil, p, r), bruteNear(solids, p, r); !slices.Equal(got, want) {
+				t.Fatalf("%d poles over %g m, point %v radius %g: got %d, want %d", tc.n, tc.spread, p, r, len(got), len(want))
+			}
+		}
+	}
+}
