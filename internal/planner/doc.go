@@ -20,6 +20,19 @@
 // use the conservative envelopes of package jet plus the request's margin,
 // and are taken for the microphone, its boom and its stand from the floor up.
 //
+// # Crowded stands
+//
+// The spacing check names the stand that overlaps a station's stand most
+// (or the nearest one) with the gap, and counts the stands that overlap it,
+// or come closer than the layout asks, up to 100: beyond that the reason
+// says "overlaps more than 100 other stands". The verdict rests on the
+// deepest overlap alone, which is found exactly: a k-d tree of the stands'
+// centres whose nodes know their largest base, so that a wide base farther
+// off is not missed for a small one nearer. A sight-line reason names at
+// most three blockers. So a crowd of thousands of stands that all overlap
+// one another costs each station about what a crowd of a hundred does, and
+// its reasons stay one line each.
+//
 // # Automatic radius
 //
 // An arc with AutoRadius gets the largest radius at which every requested
