@@ -58,6 +58,11 @@ type builder struct {
 	hazardsDrawn []hazard
 	noise        *planner.NoiseMap // the predicted noise contours; nil when noiseErr says why
 	noiseErr     error
+	// figures are the figures of the later sheets, tables and absorption
+	// their tables, laid out once
+	figures    map[string][]block
+	tables     map[string]*laidTable
+	absorption []*laidTable
 }
 
 // Build lays out the sheet set of plan p: pages, scale, every drawn item's
@@ -253,40 +258,56 @@ func (b *builder) usedArea(pg *Page) float64 {
 	return a
 }
 
+// laidTable returns the table name made by mk, laid out once per sheet set.
+func (b *builder) laidTable(f *flow, name string, mk func() tableSpec) *laidTable {
+	lt, ok := b.tables[name]
+	if !ok {
+		lt = b.layTable(mk(), f.area.W)
+		if b.tables == nil {
+			b.tables = make(map[string]*laidTable)
+		}
+		b.tables[name] = lt
+	}
+	return lt
+}
+
 // flowSheets lays out the sheets after the first on f.
 func (b *builder) flowSheets(f *flow) {
 	// the set-out table opens a sheet of its own
 	f.newPage()
-	f.table(b.setOutTable())
+	f.placeTable(b.laidTable(f, "setout", b.setOutTable))
 	f.gap(4)
 	f.columns("SET-UP STEPS (for this plan; positions from the datum)", b.steps())
 	f.gap(3)
-	f.figures(b.sideViews)
-	f.figures(func(g *flow) { g.details(b.details) })
+	f.figures("views", b.sideViews)
+	f.figures("details", func(g *flow) { g.details(b.details) })
 	if len(b.model.Key) > 0 && !b.keyPlaced {
-		f.figures(func(g *flow) {
+		f.figures("key", func(g *flow) {
 			h := b.keyHeight(g.area.W)
 			b.keyPanel(g.page, Rect{g.area.X, g.y, g.area.W, h})
 			g.y += h
 		})
 	}
-	f.gap(3)
-	f.table(b.stationTable())
-	f.gap(3)
-	f.table(b.arraysTable())
-	f.gap(3)
-	f.table(b.pointsTable())
-	if lt := b.levelTable(); len(lt.rows) > 0 {
-		f.gap(3)
-		f.table(lt)
+	for _, k := range []struct {
+		name string
+		mk   func() tableSpec
+	}{{"stations", b.stationTable}, {"arrays", b.arraysTable}, {"points", b.pointsTable}, {"levels", b.levelTable}, {"crew", b.crewTable}} {
+		if k.name == "crew" && len(b.plan.Crew) == 0 {
+			continue
+		}
+		if lt := b.laidTable(f, k.name, k.mk); len(lt.rows) > 0 || k.name != "levels" {
+			f.gap(3)
+			f.placeTable(lt)
+		}
 	}
-	if len(b.plan.Crew) > 0 {
-		f.gap(3)
-		f.table(b.crewTable())
+	if b.absorption == nil {
+		for _, t := range b.absorptionTables() {
+			b.absorption = append(b.absorption, b.layTable(t, f.area.W))
+		}
 	}
-	for _, t := range b.absorptionTables() {
+	for _, lt := range b.absorption {
 		f.gap(3)
-		f.table(t)
+		f.placeTable(lt)
 	}
 	// the warnings that did not fit sheet 1's panel, each whole
 	if rest := b.safetyFirst()[b.warningsShown:]; len(rest) > 0 {

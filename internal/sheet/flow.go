@@ -169,33 +169,28 @@ func (f *flow) flush() {
 	}
 }
 
-// place puts bl on the current sheet at the flow's y.
+// place puts a copy of bl on the current sheet at the flow's y (the
+// figures are kept to be placed again when the flow is run again to
+// balance the last sheet).
 func (f *flow) place(bl *block) {
 	dy := f.y - bl.y0
 	pg := f.page
 	for _, v := range bl.views {
 		v.Frame.Y += dy
-		for i := range v.Shapes {
-			shiftShape(&v.Shapes[i], dy)
-		}
+		v.Shapes = shifted(v.Shapes, dy)
 		pg.Views = append(pg.Views, v)
 	}
 	for _, l := range bl.labels {
 		l.Y += dy
 		l.Anchor.Y += dy
-		for i := range l.Line {
-			l.Line[i].Y += dy
-		}
+		l.Line = shiftPts(l.Line, dy)
 		pg.Labels = append(pg.Labels, l)
 	}
 	for _, t := range bl.texts {
 		t.Y += dy
 		pg.Texts = append(pg.Texts, t)
 	}
-	for _, s := range bl.shapes {
-		shiftShape(&s, dy)
-		pg.Shapes = append(pg.Shapes, s)
-	}
+	pg.Shapes = append(pg.Shapes, shifted(bl.shapes, dy)...)
 	for _, t := range bl.tables {
 		t.Y += dy
 		pg.Tables = append(pg.Tables, t)
@@ -203,30 +198,55 @@ func (f *flow) place(bl *block) {
 	f.y += bl.h + blockGap
 }
 
-// shiftShape moves s down by dy mm.
-func shiftShape(s *Shape, dy float64) {
-	for i := range s.Points {
-		s.Points[i].Y += dy
-	}
-	for _, h := range s.Holes {
-		for i := range h {
-			h[i].Y += dy
+// shifted returns copies of shapes moved down by dy mm.
+func shifted(shapes []Shape, dy float64) []Shape {
+	out := make([]Shape, len(shapes))
+	for i, s := range shapes {
+		s.Points = shiftPts(s.Points, dy)
+		s.Clip = shiftPts(s.Clip, dy)
+		if s.Holes != nil {
+			hs := make([][]Pt, len(s.Holes))
+			for j, h := range s.Holes {
+				hs[j] = shiftPts(h, dy)
+			}
+			s.Holes = hs
 		}
+		out[i] = s
 	}
-	for i := range s.Clip {
-		s.Clip[i].Y += dy
+	return out
+}
+
+// shiftPts returns a copy of pts moved down by dy mm (nil for nil).
+func shiftPts(pts []Pt, dy float64) []Pt {
+	if pts == nil {
+		return nil
 	}
+	out := make([]Pt, len(pts))
+	for i, p := range pts {
+		out[i] = Pt{p.X, p.Y + dy}
+	}
+	return out
 }
 
 // figures lays out with lay on scratch sheets and queues what it drew,
-// cut into figures at the vertical gaps between them, in order.
-func (f *flow) figures(lay func(g *flow)) {
-	g := f.scratch()
-	lay(g)
-	for i := range *g.sink {
-		for _, bl := range cut(&(*g.sink)[i]) {
-			f.float(bl)
+// cut into figures at the vertical gaps between them, in order. The
+// figures are laid out once per sheet set and kept under name.
+func (f *flow) figures(name string, lay func(g *flow)) {
+	b := f.b
+	bls, ok := b.figures[name]
+	if !ok {
+		g := f.scratch()
+		lay(g)
+		for i := range *g.sink {
+			bls = append(bls, cut(&(*g.sink)[i])...)
 		}
+		if b.figures == nil {
+			b.figures = make(map[string][]block)
+		}
+		b.figures[name] = bls
+	}
+	for _, bl := range bls {
+		f.float(bl)
 	}
 }
 

@@ -113,10 +113,23 @@ func splitWords(s string) []string {
 // title (each lane with the heading) when it does not end in the first, or
 // is long, its last lanes balanced.
 func (f *flow) table(t tableSpec) {
-	b := f.b
+	f.placeTable(f.b.layTable(t, f.area.W))
+}
+
+// laidTable is a table with its columns sized and its cells wrapped.
+type laidTable struct {
+	t     tableSpec
+	cols  []Column
+	rows  []Row
+	headH float64 // heading row, mm
+	tw    float64 // width, mm
+}
+
+// layTable sizes the columns of t within w (or its own largest width) and
+// wraps its cells.
+func (b *builder) layTable(t tableSpec, w float64) *laidTable {
 	sz := sizeTable
 	lh := lineHeight(sz)
-	w := f.area.W
 	if t.maxW > 0 {
 		w = math.Min(w, t.maxW)
 	}
@@ -148,6 +161,15 @@ func (f *flow) table(t tableSpec) {
 		}
 		rows[ri] = Row{Cells: cells, H: float64(n)*lh + 2*cellPadY}
 	}
+	return &laidTable{t: t, cols: cols, rows: rows, headH: headH, tw: tw}
+}
+
+// placeTable places lt on the flow (see table).
+func (f *flow) placeTable(lt *laidTable) {
+	b := f.b
+	t, cols, rows, headH, tw := lt.t, lt.cols, lt.rows, lt.headH, lt.tw
+	sz := sizeTable
+	lh := lineHeight(sz)
 	lanes := max(1, int((f.area.W+laneGap)/(tw+laneGap)))
 	title := func(s string) ([]string, float64) {
 		tl := b.m.wrap(s, f.area.W, sizeBody, true)
