@@ -27,15 +27,27 @@
 // the safety panel (the WARNING signal word of ANSI Z535.4 and ISO 3864-2),
 // the legend, the notes, the plan's warnings and the title block. An open
 // site much larger than its stations is drawn cropped to them, with break
-// marks where its boundary leaves the frame. The following sheets carry the
-// elevation (the vertical section through the axis, zones cut at the floor,
-// ceiling and walls) and the clearance view (each station at its true
-// distance from the axis), detail views of arrays too dense to label at the
-// plan's scale, the set-out table on a sheet of its own, the set-up steps,
-// the station table (nominal and as-placed radius and angle, the point of
-// each clearance), the operating-points table, the absorption table and the
-// planner's warnings. Every sheet has the title block in its bottom-right
-// corner.
+// marks where its boundary leaves the frame. Sheet 2 opens with the set-out
+// table; the set-up steps, the elevation (the vertical section through the
+// axis, zones cut at the floor, ceiling and walls), the clearance view (each
+// station at its true distance from the axis), detail views of arrays too
+// dense to label at the plan's scale, the station table (nominal and
+// as-placed radius and angle, the point of each clearance), the
+// operating-points table, the absorption table and the planner's warnings
+// follow. Every sheet has the title block in its bottom-right corner.
+//
+// # Page flow
+//
+// The sheets after the first are filled in that order, each before the next
+// is started (flow.go): a table runs on row by row into the space left,
+// repeating its heading with its title marked continued on a new sheet; a
+// table narrow enough to stand twice across runs on in lanes side by side
+// under one title, balanced where it ends; text runs in columns, balanced
+// where it ends, a warning never split; a drawing (figure) that does not fit
+// where it comes waits for the top of the next sheet while the tables and
+// text after it fill the space. When the last sheet is less than 40 % full
+// the flow is run again with the foot of the sheet before raised, and the
+// layout whose emptier sheet of the two is fullest is kept.
 //
 // # Dates
 //
