@@ -34,7 +34,6 @@ var short = map[string]struct {
 	slack int
 	last  float64
 }{
-	"anechoic-model-jet":    {2, minFill},
 	"anechoic-model-jet/A4": {2, minFill},
 	"outdoor-static-pad/A4": {3, 0.12},
 	"few stations":          {1, 0.12},
