@@ -30,10 +30,6 @@ const (
 	detailMinGap = 5.0
 )
 
-// shortLeader is the longest leader (mm) that still reads as beside its
-// station, so that its array needs no detail for it.
-const shortLeader = 10.0
-
 // maxDetails is the most detail views a sheet set draws.
 const maxDetails = 12
 
@@ -61,18 +57,18 @@ func detailFits(bd orb.Bound, scale int) bool {
 // findDetails returns the detail views of the plan: one for each array
 // whose neighbouring stations lie less than denseMM apart on the plan or
 // some of whose stations got no ID right beside them (none, or one on a
-// leader longer than shortLeader), when a standard scale at
-// least 1.5 times the plan's shows the array in a detail frame with its
-// stations at least detailMinGap apart. It draws each detail's outline on
+// leader for want of room rather than to keep off the hatch), when a
+// standard scale at least 1.5 times the plan's shows the array in a detail
+// frame with its stations at least detailMinGap apart. It draws each detail's outline on
 // the plan with its letter.
 func (v *planView) findDetails() []detail {
 	b := v.b
-	// an ID on a short leader (one that stepped off the hatch or a
-	// neighbour's mark) reads as beside its station; a detail drawn for it
+	// an ID that went on a leader to keep off the hatch beside its mark
+	// needs no detail: the hatch grows with the scale, and the detail
 	// would only repeat the leader
 	labelled := map[string]bool{}
 	for _, l := range v.labels {
-		if l.Kind == StationLabel && (!l.Leader || len(l.Line) == 2 && dist(l.Line[0], l.Line[1]) <= shortLeader) {
+		if l.Kind == StationLabel && (!l.Leader || v.offHatch[l.For]) {
 			labelled[l.For] = true
 		}
 	}

@@ -33,6 +33,12 @@ func (v *planView) placeText(s string, kind LabelKind, of string, size float64, 
 		return false
 	}
 	v.pl.commit(sp)
+	if sp.offHatch && kind == StationLabel {
+		if v.offHatch == nil {
+			v.offHatch = map[string]bool{}
+		}
+		v.offHatch[of] = true
+	}
 	v.labels = append(v.labels, Label{
 		Text: s, Kind: kind, For: of, X: sp.box.X, Y: sp.box.Y, W: sp.box.W, H: sp.box.H,
 		Size: size, Anchor: anchor, Leader: sp.leader, Line: leaderLine(sp), View: v.viewName(),

@@ -405,3 +405,17 @@ func hugPlan(t testing.TB) *planner.Plan {
 	f.ring("R", 3, 1.5, 12)
 	return f.finish()
 }
+
+// TestNearFieldDetail: the anechoic demo's near-field line, whose IDs go
+// on leaders for want of room, keeps its detail view (issue 9 item 4).
+func TestNearFieldDetail(t *testing.T) {
+	m := build(t, demoPlan(t, "../../layouts/anechoic-model-jet.yaml"), sheet.Options{})
+	for _, pg := range m.Pages {
+		for _, tx := range pg.Texts {
+			if strings.HasPrefix(tx.Text, "DETAIL ") && strings.Contains(tx.Text, "array N,") {
+				return
+			}
+		}
+	}
+	t.Error("no detail view of the near-field line N")
+}

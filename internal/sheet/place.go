@@ -158,6 +158,9 @@ type spot struct {
 	leader bool
 	from   Pt // leader start, on the mark's edge
 	to     Pt // leader end, on the box's edge
+	// offHatch is set on a spot on a leader when a spot beside the mark
+	// was free but on the hatch: the label moved to keep off the hatch
+	offHatch bool
 }
 
 // nearTurns are the directions tried beside the mark, radians from the
@@ -245,6 +248,7 @@ func popCand(h []cand) []cand {
 // out). The choice is deterministic. It does not take the spot.
 func (p *placer) find(w want, far []float64) (spot, bool) {
 	best, bestCost := spot{}, math.Inf(1)
+	nearHatch := false
 	for _, t := range nearTurns {
 		base := nearGapMM + turnCost*math.Abs(t)
 		if base >= bestCost {
@@ -257,6 +261,7 @@ func (p *placer) find(w want, far []float64) (spot, bool) {
 		}
 		cost := base
 		if h := p.onHatch(box); h > 0 {
+			nearHatch = true
 			if len(far) == 0 {
 				continue
 			}
@@ -294,7 +299,7 @@ func (p *placer) find(w want, far []float64) (spot, bool) {
 		}
 		near := rectEdgePoint(box, w.anchor)
 		v := unit(sub(near, w.anchor), w.dir)
-		s := spot{box: box, leader: true, from: add(w.anchor, mul(v, w.clear*1.15))}
+		s := spot{box: box, leader: true, from: add(w.anchor, mul(v, w.clear*1.15)), offHatch: nearHatch}
 		s.to = rectEdgePoint(box, s.from)
 		if !p.clearPath(s.from, s.to) {
 			continue

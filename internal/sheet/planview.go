@@ -32,6 +32,9 @@ type planView struct {
 	// every other callout
 	hazardLabels []callout
 	datumOut     bool // the datum lies outside the frame and is not drawn
+	// offHatch holds the stations whose IDs went on a leader to keep off
+	// the hatch beside their marks
+	offHatch map[string]bool
 	// name is the view's name, "" for the plan; scale its denominator
 	name  string
 	scale int
