@@ -1,6 +1,7 @@
 package sheet
 
 import (
+	"fmt"
 	"io"
 	"math"
 	"sort"
@@ -213,6 +214,7 @@ func (b *builder) text(x, y, size float64, bold bool, s string) Text {
 // tables and the warnings that did not fit sheet 1, each filling the space
 // the one before left.
 func (b *builder) continuation() {
+	defer b.detailsNote()
 	f := newFlow(b)
 	first := len(b.model.Pages)
 	b.flowSheets(f)
@@ -240,6 +242,29 @@ func (b *builder) continuation() {
 		}
 	}
 	b.model.Pages = best
+}
+
+// detailsLater ends the plan's note on the detail views as the plan view
+// writes it (details.go).
+const detailsLater = "enlarged on the first sheet after this one."
+
+// detailsNote makes the plan's note on the detail views name the sheet the
+// first of them is on, which the flow decides.
+func (b *builder) detailsNote() {
+	for i := 1; i < len(b.model.Pages); i++ {
+		for _, v := range b.model.Pages[i].Views {
+			if !strings.HasPrefix(v.Name, "detail") {
+				continue
+			}
+			pg := &b.model.Pages[0]
+			for j := range pg.Texts {
+				if t := pg.Texts[j].Text; strings.HasSuffix(t, detailsLater) {
+					pg.Texts[j].Text = strings.TrimSuffix(t, detailsLater) + fmt.Sprintf("enlarged on sheet %d.", i+1)
+				}
+			}
+			return
+		}
+	}
 }
 
 // usedArea returns the area the tables, views and texts of pg cover, mm²

@@ -457,3 +457,41 @@ func TestFlowDeterministic(t *testing.T) {
 		}
 	}
 }
+
+// TestDetailsNoteNamesTheSheet: the plan's note on the detail views names
+// the sheet they are on (the flow puts the set-out table on sheet 2, so
+// the details are no longer on "the first sheet after this one").
+func TestDetailsNoteNamesTheSheet(t *testing.T) {
+	for _, c := range []struct {
+		name string
+		plan func(testing.TB) *planner.Plan
+	}{
+		{"anechoic demo", func(t testing.TB) *planner.Plan { return demoPlan(t, "../../layouts/anechoic-model-jet.yaml") }},
+		{"500 stations", func(t testing.TB) *planner.Plan { return padPlan(t, 500) }},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			m := build(t, c.plan(t), sheet.Options{})
+			at := 0
+			for i := 1; i < len(m.Pages) && at == 0; i++ {
+				for _, v := range m.Pages[i].Views {
+					if strings.HasPrefix(v.Name, "detail") {
+						at = i + 1
+						break
+					}
+				}
+			}
+			if at == 0 {
+				t.Fatal("no detail view: the case tests nothing")
+			}
+			var note string
+			for _, tx := range m.Pages[0].Texts {
+				if strings.Contains(tx.Text, "enlarged on") {
+					note = tx.Text
+				}
+			}
+			if want := fmt.Sprintf("enlarged on sheet %d.", at); !strings.HasSuffix(note, want) {
+				t.Errorf("sheet 1 says %q, want it to end %q", note, want)
+			}
+		})
+	}
+}
