@@ -227,7 +227,7 @@ func (b *builder) notesPanel(pg *Page, r Rect, extra []string) float64 {
 		notes = append(notes, fmt.Sprintf("Not labelled for lack of room (%s): %s. Their positions are in the station table.",
 			plural(n, "station"), idList(b.model.Unlabelled)))
 	}
-	notes = append(notes, "Set-up steps, elevation and tables: sheet 2 onwards.")
+	notes = append(notes, "Set-out table and set-up steps: sheet 2; then the elevation, details and tables.")
 	const pad = 2.0
 	sz := sizeSmall
 	lh := lineHeight(sz)
