@@ -231,6 +231,58 @@ func zoneClearance(e *jet.Envelope, fixed, boom []probe, best float64) (float64,
 	return min, part
 }
 
+// zoneHit is the clearance of a station's (or a crew position's) probes
+// from one conservative zone of one operating point.
+type zoneHit struct {
+	c    float64 // clearance less the part's radius, m; NaN: not evaluable
+	part string  // the part that sets it
+	bent bool    // set by the zone about the bent path of a buoyant point
+	wall *Attached
+}
+
+// zoneHit returns the clearance of the probes from zone z (envelope env) of
+// point p: about the straight axis, about the bent path of a buoyant point
+// and the zones the floor, ceiling and walls carry on, whichever is
+// nearest. bent holds the same hardware as bent-zone probes (it may be nil
+// when p is not buoyant and nothing is attached); best is the smallest
+// clearance found so far for other points: probes that cannot beat it are
+// skipped.
+func (ck *checker) zoneHit(p *PointResult, z jet.Zone, env *jet.Envelope, fixed, boom []probe, bent []bentProbe, best float64) zoneHit {
+	c, part := zoneClearance(env, fixed, boom, best)
+	h := zoneHit{c: c, part: part}
+	if bp := p.Plume.Bent(); bp != nil {
+		if cb, pb := bentClearance(bp, z, bent, math.Min(c, best)); cb < h.c || math.IsNaN(cb) {
+			h.c, h.part, h.bent = cb, pb, true
+		}
+	}
+	if len(ck.attached) > 0 {
+		if ca, pa, a := ck.attachedClearance(p.Name, z, bent); ca < h.c || math.IsNaN(ca) {
+			h = zoneHit{c: ca, part: pa, wall: a}
+		}
+	}
+	return h
+}
+
+// zoneWords names zone z with its limit and, from h, how it is bent or
+// carried: "velocity zone (mean flow above 5 m/s), bent by buoyancy,".
+func (ck *checker) zoneWords(z jet.Zone, h zoneHit) string {
+	w := fmt.Sprintf("velocity zone (mean flow above %s)", ck.v(ck.lim.Velocity))
+	if z == jet.HotZone {
+		w = fmt.Sprintf("hot zone (above %s)", ck.t(ck.lim.Temperature))
+	}
+	switch {
+	case h.bent:
+		w += ", bent by buoyancy,"
+	case h.wall != nil:
+		how := "carried along the " + h.wall.Surface + " as a wall jet"
+		if h.wall.Radial {
+			how = "spread over the wall it strikes"
+		}
+		w += ", " + how + ","
+	}
+	return w
+}
+
 // evaluate runs every check on station i and sets its verdict.
 func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	t := &tally{}
@@ -246,8 +298,7 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	var bentProbes []bentProbe
 	for _, k := range ck.order {
 		p := &ck.points[k]
-		bp := p.Plume.Bent()
-		if (bp != nil || len(ck.attached) > 0) && bentProbes == nil {
+		if (p.Plume.Bent() != nil || len(ck.attached) > 0) && bentProbes == nil {
 			bentProbes = ck.bentProbes(st)
 		}
 		for _, z := range []struct {
@@ -255,24 +306,12 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 			zone jet.Zone
 			env  *jet.Envelope
 			best *float64
-			what func() string
 		}{
-			{CheckVelocity, jet.VelocityZone, p.Velocity(), &bestV, func() string { return fmt.Sprintf("velocity zone (mean flow above %s)", ck.v(lim.Velocity)) }},
-			{CheckHot, jet.HotZone, p.Hot(), &bestH, func() string { return fmt.Sprintf("hot zone (above %s)", ck.t(lim.Temperature)) }},
+			{CheckVelocity, jet.VelocityZone, p.Velocity(), &bestV},
+			{CheckHot, jet.HotZone, p.Hot(), &bestH},
 		} {
-			c, part := zoneClearance(z.env, fixed, boom, *z.best)
-			bent := false
-			if bp != nil {
-				if cb, pb := bentClearance(bp, z.zone, bentProbes, math.Min(c, *z.best)); cb < c || math.IsNaN(cb) {
-					c, part, bent = cb, pb, true
-				}
-			}
-			var wall *Attached
-			if len(ck.attached) > 0 {
-				if ca, pa, a := ck.attachedClearance(p.Name, z.zone, bentProbes); ca < c || math.IsNaN(ca) {
-					c, part, bent, wall = ca, pa, false, a
-				}
-			}
+			h := ck.zoneHit(p, z.zone, z.env, fixed, boom, bentProbes, *z.best)
+			c, part := h.c, h.part
 			if _, seen := t.get(z.name); seen && c >= *z.best {
 				continue
 			}
@@ -281,29 +320,17 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 			if c < lim.Margin {
 				ch.Verdict = Blocked
 			}
-			what := z.what
-			switch {
-			case bent:
-				plain := z.what
-				what = func() string { return plain() + ", bent by buoyancy," }
-			case wall != nil:
-				plain := z.what
-				how := "carried along the " + wall.Surface + " as a wall jet"
-				if wall.Radial {
-					how = "spread over the wall it strikes"
-				}
-				what = func() string { return plain() + ", " + how + "," }
-			}
 			t.offer(ch, func(ch Check) (reason string) {
+				what := ck.zoneWords(z.zone, h)
 				switch {
 				case math.IsInf(c, 1):
-					reason = "no " + what() + " at this point"
+					reason = "no " + what + " at this point"
 				case c < 0:
-					reason = fmt.Sprintf("%s inside the %s of %s, %s deep", part, what(), p.Name, ck.m(-c))
+					reason = fmt.Sprintf("%s inside the %s of %s, %s deep", part, what, p.Name, ck.m(-c))
 				case c < lim.Margin:
-					reason = fmt.Sprintf("%s %s from the %s of %s; the margin is %s", part, ck.m(c), what(), p.Name, ck.m(lim.Margin))
+					reason = fmt.Sprintf("%s %s from the %s of %s; the margin is %s", part, ck.m(c), what, p.Name, ck.m(lim.Margin))
 				default:
-					reason = fmt.Sprintf("%s clear of the %s of %s", ck.m(c), what(), p.Name)
+					reason = fmt.Sprintf("%s clear of the %s of %s", ck.m(c), what, p.Name)
 				}
 				return
 			})

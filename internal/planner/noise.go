@@ -74,8 +74,12 @@ type CrewExposure struct {
 	// AllowedHours is the time allowed at AWeighted under the NIOSH REL, h.
 	AllowedHours float64
 	Class        acoustics.ExposureClass
-	Status       Verdict
-	Reason       string
+	// InZone is true when a person standing here is inside (or within the
+	// margin of) a velocity or hot zone of the point: the status is blocked
+	// whatever the noise.
+	InZone bool
+	Status Verdict
+	Reason string
 }
 
 // NoiseJet returns the fully expanded jet of e as the acoustics package's
@@ -263,32 +267,18 @@ func (ck *checker) crewExposures() []CrewExposure {
 	for _, c := range ck.req.Crew {
 		for k := range ck.points {
 			e := CrewExposure{Name: c.Name, Point: ck.points[k].Name, At: c.At, Hours: c.Hours}
-			l, err := ck.levelAt(k, c.At)
-			if err != nil {
+			if l, err := ck.levelAt(k, c.At); err != nil {
+				// never passed as safe: no time allowed
 				e.AWeighted, e.Peak, e.DailyExposure, e.AllowedHours = math.NaN(), math.NaN(), math.NaN(), 0
 				e.Class, e.Status = acoustics.AboveLimit, Blocked
-				e.Reason = "the level could not be predicted: the position is at the source"
-				out = append(out, e)
-				continue
+				e.Reason = "the level could not be predicted (" + err.Error() + ")"
+			} else {
+				ck.grade(&e, l)
 			}
-			e.AWeighted, e.Peak = l.AWeighted, l.Peak
-			e.DailyExposure = acoustics.DailyExposure(l.AWeighted, c.Hours)
-			e.AllowedHours = acoustics.NIOSHAllowedHours(l.AWeighted)
-			e.Class = acoustics.ClassifyExposure(e.DailyExposure, e.Peak)
-			over := c.Hours > e.AllowedHours
-			switch {
-			case e.Class == acoustics.AboveLimit || over || e.Peak >= acoustics.NIOSHCeilingPeak:
-				e.Status = Blocked
-			case e.Class > acoustics.BelowAction:
-				e.Status = Warn
-			default:
-				e.Status = OK
-			}
-			e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
-				l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(c.Hours), e.Class, units.FormatHours(e.AllowedHours))
+			// a zone outranks the noise: hearing protection is no help there
 			if zone := ck.crewZone(k, c.At); zone != "" {
-				e.Status = Blocked
-				e.Reason = "inside the " + zone + " of " + e.Point + ": no one may stand here during its runs; " + e.Reason
+				e.Status, e.InZone = Blocked, true
+				e.Reason = zone + ": no one may stand here during its runs; " + e.Reason
 				out = append(out, e)
 				continue
 			}
@@ -307,18 +297,60 @@ func (ck *checker) crewExposures() []CrewExposure {
 	return out
 }
 
-// crewZone names the conservative zone of point k, with the layout's
-// margin, that holds pos (cell frame, m), or returns "".
+// grade sets e's levels, exposure, allowed time and status from the levels
+// l at the position.
+func (ck *checker) grade(e *CrewExposure, l acoustics.Levels) {
+	e.AWeighted, e.Peak = l.AWeighted, l.Peak
+	e.DailyExposure = acoustics.DailyExposure(l.AWeighted, e.Hours)
+	e.AllowedHours = acoustics.NIOSHAllowedHours(l.AWeighted)
+	e.Class = acoustics.ClassifyExposure(e.DailyExposure, e.Peak)
+	over := e.Hours > e.AllowedHours
+	switch {
+	case e.Class == acoustics.AboveLimit || over || e.Peak >= acoustics.NIOSHCeilingPeak:
+		e.Status = Blocked
+	case e.Class > acoustics.BelowAction:
+		e.Status = Warn
+	default:
+		e.Status = OK
+	}
+	e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
+		l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(e.Hours), e.Class, units.FormatHours(e.AllowedHours))
+}
+
+// crewBodyRadius is the radius of the column a person standing at a crew
+// position takes up, from the floor to the ears, m: 0.25 m, about half a
+// man's shoulder breadth with room to turn (common practice, from memory).
+// The zone check treats the person as a stand of this size, so a wall jet
+// along the floor or a zone bent by buoyancy reaches the legs and body as
+// it reaches a stand.
+const crewBodyRadius = 0.25
+
+// crewBody is the person at a crew position as a stand: a pole of the
+// body's size from the floor to the ears.
+var crewBody = Stand{Name: "person", BaseRadius: crewBodyRadius, PoleDiameter: 2 * crewBodyRadius}
+
+// crewZone returns, for a person standing with the ears at pos (cell frame,
+// m), the zone of point k, with the layout's margin, that reaches the
+// person, in words, or "". It is the stations' zone check (straight, bent
+// and attached zones, velocity and hot) run on a station whose stand is the
+// person's body.
 func (ck *checker) crewZone(k int, pos r3.Vec) string {
 	p := &ck.points[k]
-	q := ck.req.Exit.ToJet(pos)
-	margin := ck.req.Limits.withDefaults().Margin
+	st := &Station{Mic: pos, Base: orb.Point{pos.X, pos.Y}, Stand: &crewBody}
+	fixed, boom := ck.hardware(st)
+	bent := ck.bentProbes(st)
 	for _, z := range []struct {
-		name string
+		zone jet.Zone
 		env  *jet.Envelope
-	}{{"velocity zone", p.Velocity()}, {"hot zone", p.Hot()}} {
-		if z.env.Length > 0 && z.env.Clearance(q.X, q.R) < margin {
-			return z.name
+	}{{jet.VelocityZone, p.Velocity()}, {jet.HotZone, p.Hot()}} {
+		h := ck.zoneHit(p, z.zone, z.env, fixed, boom, bent, math.Inf(1))
+		switch {
+		case math.IsNaN(h.c):
+			return "the " + ck.zoneWords(z.zone, h) + " of " + p.Name + " (the clearance could not be evaluated)"
+		case h.c < 0:
+			return "inside the " + ck.zoneWords(z.zone, h) + " of " + p.Name
+		case h.c < ck.lim.Margin:
+			return fmt.Sprintf("%s from the %s of %s, inside the %s margin", ck.m(h.c), ck.zoneWords(z.zone, h), p.Name, ck.m(ck.lim.Margin))
 		}
 	}
 	return ""
@@ -341,7 +373,8 @@ func (ck *checker) noiseWarnings(plan *Plan) []string {
 		for ; j < len(plan.Crew) && plan.Crew[j].Name == plan.Crew[i].Name; j++ {
 			if e := plan.Crew[j]; e.Status == Blocked {
 				n++
-				if worst < 0 || !(e.AWeighted <= plan.Crew[worst].AWeighted) {
+				// a zone first (its reason says no one may stand there), then the loudest
+				if w := &plan.Crew[max(worst, 0)]; worst < 0 || e.InZone && !w.InZone || e.InZone == w.InZone && !(e.AWeighted <= w.AWeighted) {
 					worst = j
 				}
 			}

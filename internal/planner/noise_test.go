@@ -131,7 +131,7 @@ func TestRoomLevels(t *testing.T) {
 // follows the level at the position and the hours spent there.
 func TestCrewExposure(t *testing.T) {
 	req, lc := freeRoom(t)
-	near := r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 0.5, Z: req.Exit.Exit.Z}
+	near := r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 1, Z: req.Exit.Exit.Z}
 	req.Crew = []Crew{{Name: "near", At: near, Hours: 8}, {Name: "brief", At: near, Hours: 1.0 / 3600}}
 	p := mustPlan(t, req)
 	if len(p.Crew) != 2*len(p.Points) {
