@@ -3,6 +3,7 @@ package main
 import (
 	"fmt"
 	"io"
+	"math"
 
 	"arcwright/internal/planner"
 	"arcwright/internal/units"
@@ -21,7 +22,7 @@ func planNoiseText(w io.Writer, p *planner.Plan) {
 	for i := range p.Stations {
 		s := &p.Stations[i]
 		c, ok := s.Check(planner.CheckLevel)
-		if !ok || len(s.Levels) == 0 {
+		if !ok || len(s.Levels) == 0 || math.IsNaN(c.Value) {
 			continue
 		}
 		var loud planner.Level

@@ -80,7 +80,9 @@
 // the source position, ISO 9613-1 absorption per band, the floor image over
 // a hard floor (the band average of the coherent sum: +6 dB flush, tending
 // to the energy sum's +3 dB), and the reverberant field 4·ρ0·c0·W/R of a
-// hard-walled room ([RoomConstant], Sabine's [SabineAbsorption]). It gives
+// hard-walled room ([RoomConstant]; [EyringAbsorption] turns a reverberation
+// time into ᾱ by Eyring's formula, which, unlike Sabine's, stays below 1
+// and does not overstate the absorption of a dead room). It gives
 // OASPL, the A- and C-weighted levels of IEC 61672-1 ([AWeighting],
 // [CWeighting]) and a C-weighted peak estimate (the C level plus a crest
 // factor of 12 dB for subsonic jets, 15 dB otherwise), with a stated

@@ -202,14 +202,46 @@ func TestReverberantField(t *testing.T) {
 	if !withinAbs(l.OASPL, want, 0.01) {
 		t.Errorf("got %.3f dB, want %.3f dB", l.OASPL, want)
 	}
-	// room constant from Sabine's T60 = 0.161·V/(S·ᾱ): a 10×8×5 m room
-	// (V = 400 m³, S = 340 m²) with T60 = 1 s has ᾱ = 0.189 (hand-computed)
-	a := SabineAbsorption(400, 340, 1)
-	if !withinAbs(a, 0.161*400/340, 1e-12) {
-		t.Errorf("got ᾱ = %.4f, want 0.1894", a)
+	// room constant from Eyring's T60 = 0.161·V/(−S·ln(1 − ᾱ)) (Eyring 1930,
+	// J. Acoust. Soc. Am. 1, FROM MEMORY, textbook): a 10×8×5 m room
+	// (V = 400 m³, S = 340 m²) with T60 = 1 s has
+	// ᾱ = 1 − exp(−0.161·400/340) = 0.17255 (hand-computed; Sabine's
+	// 0.161·V/(S·T60) gives 0.18941)
+	a := EyringAbsorption(400, 340, 1)
+	if !withinAbs(a, 0.17255, 5e-6) {
+		t.Errorf("got ᾱ = %.5f, want 0.17255", a)
 	}
 	if r := RoomConstant(340, a); !withinAbs(r, 340*a/(1-a), 1e-9) {
 		t.Errorf("got R = %.3f m², want %.3f", r, 340*a/(1-a))
+	}
+}
+
+// TestEyringAbsorption checks Eyring's ᾱ against hand-computed values
+// (DERIVED from ᾱ = 1 − exp(−0.161·V/(S·T60)), Eyring 1930, FROM MEMORY):
+// it stays below 1 however short the time, where Sabine's passes 1, and
+// it meets Sabine's in a live room.
+func TestEyringAbsorption(t *testing.T) {
+	tests := []struct {
+		name         string
+		v, s, t60    float64
+		want, sabine float64
+	}{
+		// V/S = 1.2258 m: Sabine 0.161·1.2258/0.15 = 1.3157 (> 1)
+		{"dead room", 500, 407.9, 0.15, 0.73170, 1.31566},
+		// the reviewer's room: Sabine ᾱ 0.716, Eyring 0.511 (DERIVED: same V/S)
+		{"short time", 0.716 * 0.15 / 0.161, 1, 0.15, 0.51131, 0.716},
+		{"live room", 400, 340, 10, 0.018763, 0.018941},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			got := EyringAbsorption(tt.v, tt.s, tt.t60)
+			if !withinAbs(got, tt.want, 5e-5) || !(got < 1) {
+				t.Errorf("got ᾱ = %.5f, want %.5f (Sabine's would be %.5f)", got, tt.want, tt.sabine)
+			}
+		})
+	}
+	if a := EyringAbsorption(400, 340, 1e-6); !(a <= 1) {
+		t.Errorf("1 µs: got ᾱ = %g, want at most 1", a)
 	}
 }
 

@@ -42,8 +42,9 @@
 // value, unit, verdict, governing point and reason, and "reasons" the
 // reasons of the checks that are not ok. "levels" gives the predicted
 // levels at the microphone, one {point, oaspl_db, a_weighted_db, peak_db}
-// per operating point (empty for probe stands); checks.oaspl_db is the
-// loudest.
+// per operating point (empty for probe stands; the levels null where they
+// could not be predicted, within a jet diameter of the source position);
+// checks.oaspl_db is the loudest.
 //
 // A crew entry, one per crew position and operating point, gives name,
 // point, a_weighted_db, peak_db (the C-weighted peak estimate),

@@ -27,8 +27,11 @@
 //	                  microphone and one pattern: arc, line, near_field, ring,
 //	                  points, probes
 //	sheet             scale and paper of the printed sheet
-//	noise             room_absorption or reverberation_time (hard-walled
-//	                  cells), contours (extra dB(A) levels for the sheet)
+//	noise             room_absorption (0.01 to 0.99) or reverberation_time
+//	                  (hard-walled cells; turned into an absorption
+//	                  coefficient by Eyring's formula, which must give 0.01
+//	                  to 0.99 in the room), contours (extra dB(A) levels for
+//	                  the sheet)
 //	crew              where people stay during runs: name, at, height, hours
 //
 // A microphone is a nominal size ("1/4 in", whose typical limits apply) or

@@ -39,8 +39,8 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 	}
 	if a != nil {
 		if v, ok := d.number(a, s.field("room_absorption"), "an average absorption coefficient between 0 and 1, such as 0.05"); ok {
-			if v <= 0 || v >= 1 {
-				d.errorf(ErrInvalid, a.Line, s.field("room_absorption"), "want an average absorption coefficient above 0 and below 1, got %g", v)
+			if !(v >= planner.MinRoomAbsorption && v <= planner.MaxRoomAbsorption) {
+				d.errorf(ErrInvalid, a.Line, s.field("room_absorption"), "want an average absorption coefficient from %g to %g, got %g (bare concrete is about 0.02, a fully treated room above 0.9)", planner.MinRoomAbsorption, planner.MaxRoomAbsorption, v)
 			} else {
 				n.RoomAbsorption = v
 			}
@@ -48,9 +48,17 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 	}
 	if t != nil {
 		if v, ok := d.seconds(t, s.field("reverberation_time")); ok {
-			if v <= 0 || v > maxReverberation {
+			vol, surf, room := planner.RoomSize(&ci.cell)
+			alpha := 0.0
+			if room {
+				alpha = acoustics.EyringAbsorption(vol, surf, v)
+			}
+			switch {
+			case v <= 0 || v > maxReverberation:
 				d.errorf(ErrInvalid, t.Line, s.field("reverberation_time"), "want a reverberation time above 0 s and at most %g s, got %g s", maxReverberation, v)
-			} else {
+			case room && !(alpha >= planner.MinRoomAbsorption && alpha <= planner.MaxRoomAbsorption):
+				d.errorf(ErrInvalid, t.Line, s.field("reverberation_time"), "the reverberation time %g s gives an average absorption coefficient of %.2g (Eyring) in this room; %s (ᾱ from %g to %g)", v, alpha, planner.ReverberationRange(vol, surf), planner.MinRoomAbsorption, planner.MaxRoomAbsorption)
+			default:
 				n.Reverberation = v
 			}
 		}

@@ -56,7 +56,15 @@ func TestNoiseKeyErrors(t *testing.T) {
 		{"bad level", "    stand: tripod\n    microphone: {size: 1/4 in, max_level: loud}\n", "want a level in dB"},
 		{"implausible level", "noise:\n  contours: [500 dB(A)]\n", "noise.contours[0]: the level 500 dB is implausible"},
 		{"both room keys", "noise:\n  room_absorption: 0.1\n  reverberation_time: 2 s\n", "give room_absorption or reverberation_time, not both"},
-		{"absorption above 1", "noise:\n  room_absorption: 1.5\n", "want an average absorption coefficient above 0 and below 1"},
+		// the plausible range 0.01–0.99 is ours (a guard against slips)
+		{"absorption above 1", "noise:\n  room_absorption: 1.5\n", "noise.room_absorption: want an average absorption coefficient from 0.01 to 0.99"},
+		{"absorption tiny", "noise:\n  room_absorption: 1e-300\n", "noise.room_absorption: want an average absorption coefficient from 0.01 to 0.99, got 1e-300"},
+		// 8 × 6 × 4 m: V = 192 m³, S = 208 m²; Eyring 1930 (FROM MEMORY):
+		// ᾱ = 1 − exp(−0.161·192/(208·T60)): 0.9488 at 0.05 s (plausible),
+		// 0.9999996 at 0.01 s, 0.0074 at 20 s (DERIVED); ᾱ 0.99 and 0.01 at
+		// 0.032 s and 14.8 s
+		{"reverberation too short", "noise:\n  reverberation_time: 0.01 s\n", "noise.reverberation_time: the reverberation time 0.01 s gives an average absorption coefficient of 1 (Eyring) in this room; want 0.032 s to 14.8 s"},
+		{"reverberation too long", "noise:\n  reverberation_time: 20 s\n", "noise.reverberation_time: the reverberation time 20 s gives an average absorption coefficient of 0.0074"},
 		{"crew without place", "crew:\n  - name: desk\n", "crew[0].at: missing"},
 		{"crew hours", "crew:\n  - name: desk\n    at: [1, 1]\n    hours: 30 h\n", "crew[0].hours: want a time above 0 and at most 24 h"},
 		{"crew above ceiling", "crew:\n  - name: desk\n    at: [1, 1]\n    height: 9 m\n", "crew[0].height: the ear height is above the ceiling"},
@@ -64,7 +72,7 @@ func TestNoiseKeyErrors(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			text := baseLayout
+			text := strings.Replace(baseLayout, "kind: anechoic", "kind: hard-walled", 1)
 			if strings.HasPrefix(tt.add, "    stand: tripod\n") {
 				text = edit(t, text, "    stand: tripod\n", tt.add)
 			} else {

@@ -33,10 +33,12 @@ const DefaultEarHeight = 1.6
 // contours to draw.
 type Noise struct {
 	// RoomAbsorption is the average absorption coefficient ᾱ of a
-	// hard-walled cell (0 < ᾱ < 1); 0 means not given.
+	// hard-walled cell, MinRoomAbsorption–MaxRoomAbsorption; 0 means not
+	// given.
 	RoomAbsorption float64
 	// Reverberation is the reverberation time T60 of a hard-walled cell, s,
-	// turned into ᾱ by Sabine's formula; 0 means not given.
+	// turned into ᾱ by Eyring's formula (Eyring 1930; Sabine's overstates
+	// the absorption of a dead room); 0 means not given.
 	Reverberation float64
 	// Contours are A-weighted levels, dB(A), the sheet draws as contours
 	// besides 85 dB(A) and 140 dB(C) peak.
@@ -122,27 +124,62 @@ func newNoiseModel(req *Request, points []PointResult, atm acoustics.Atmosphere)
 		m.sources = append(m.sources, s)
 	}
 	c := &req.Cell
-	if c.Kind != geometry.HardWalled || !c.Bounded() || math.IsInf(c.Ceiling, 1) {
+	volume, surface, ok := RoomSize(c)
+	if !ok {
 		return m, nil
 	}
-	area := math.Abs(planar.Area(c.Boundary))
-	perim := planar.Length(c.Boundary)
-	surface := 2*area + perim*c.Ceiling
-	volume := area * c.Ceiling
 	switch n := req.Noise; {
-	case n.RoomAbsorption > 0:
+	case n.RoomAbsorption != 0:
 		m.alpha = n.RoomAbsorption
-	case n.Reverberation > 0:
-		m.alpha = acoustics.SabineAbsorption(volume, surface, n.Reverberation)
+	case n.Reverberation != 0:
+		m.alpha = acoustics.EyringAbsorption(volume, surface, n.Reverberation)
+		if !(m.alpha >= MinRoomAbsorption && m.alpha <= MaxRoomAbsorption) {
+			return nil, fmt.Errorf("%w: noise: the reverberation time %g s gives an average absorption coefficient of %.3g for this room (Eyring); want %g–%g: %s", ErrRequest, n.Reverberation, m.alpha, MinRoomAbsorption, MaxRoomAbsorption, ReverberationRange(volume, surface))
+		}
 	default:
 		m.alpha, m.assumed = DefaultRoomAbsorption, true
 	}
-	if !(m.alpha > 0 && m.alpha < 1) {
-		return nil, fmt.Errorf("%w: noise: the reverberation time %g s gives an average absorption coefficient of %.2f for this room; want one below 1 (is the time too short?)", ErrRequest, req.Noise.Reverberation, m.alpha)
+	if !(m.alpha >= MinRoomAbsorption && m.alpha <= MaxRoomAbsorption) {
+		return nil, fmt.Errorf("%w: noise: average absorption coefficient %g: want %g–%g", ErrRequest, m.alpha, MinRoomAbsorption, MaxRoomAbsorption)
 	}
 	m.roomR = acoustics.RoomConstant(surface, m.alpha)
 	return m, nil
 }
+
+// Plausible range of a hard-walled cell's average absorption coefficient
+// ᾱ, given or from a reverberation time (a guard of ours against slips: a
+// room of bare concrete has about 0.02, a fully treated one above 0.9;
+// common practice). The reverberant field grows without bound as ᾱ → 0.
+const (
+	MinRoomAbsorption = 0.01
+	MaxRoomAbsorption = 0.99
+)
+
+// RoomSize returns the volume (m³) and inner surface area (m²) of a
+// hard-walled cell, and false when the cell has no reverberant field (not
+// hard-walled, unbounded or open to the sky).
+func RoomSize(c *geometry.Cell) (volume, surface float64, ok bool) {
+	if c.Kind != geometry.HardWalled || !c.Bounded() || math.IsInf(c.Ceiling, 1) {
+		return 0, 0, false
+	}
+	area := math.Abs(planar.Area(c.Boundary))
+	perim := planar.Length(c.Boundary)
+	return area * c.Ceiling, 2*area + perim*c.Ceiling, true
+}
+
+// ReverberationRange says which reverberation times give a plausible
+// average absorption coefficient (Eyring) in a room of volume volume (m³)
+// and surface surface (m²): "want 0.076 s to 34.5 s for this room".
+func ReverberationRange(volume, surface float64) string {
+	// T60 = 0.161·V/(−S·ln(1 − ᾱ)) (Eyring 1930), at the ends of the range
+	t := func(a float64) float64 { return 0.161 * volume / (-surface * math.Log1p(-a)) }
+	return fmt.Sprintf("want %.2g s to %.3g s for this room (%.0f m³, %.0f m² of walls, floor and ceiling)", t(MaxRoomAbsorption), t(MinRoomAbsorption), volume, surface)
+}
+
+// minSourceDistance is the distance from the source position, in fully
+// expanded jet diameters, inside which no level is predicted: the source
+// model is a far-field one, and at the source it tends to infinity (ours).
+const minSourceDistance = 1.0
 
 // levelAt predicts the levels of point k at pos (cell frame, m): spherical
 // spreading from the source at the end of the nominal potential core (the
@@ -154,6 +191,9 @@ func (ck *checker) levelAt(k int, pos r3.Vec) (acoustics.Levels, error) {
 	q := f.ToJet(pos)
 	rel := geometry.JetPoint{X: q.X - p.CoreNominal, R: q.R}
 	path := acoustics.Path{Distance: rel.Distance(), Polar: rel.Polar(), RoomConstant: ck.noise.roomR}
+	if dj := p.Exit.FullyExpandedDiameter; !(path.Distance >= minSourceDistance*dj) {
+		return acoustics.Levels{}, fmt.Errorf("%s from the source position of %s, within one jet diameter (%s): a far-field prediction does not apply there", ck.m(path.Distance), p.Name, ck.m(dj))
+	}
 	if ck.noise.hardFloor && pos.Z >= 0 {
 		src := f.ToCell(geometry.JetPoint{X: p.CoreNominal})
 		d := r3.Sub(pos, r3.Vec{X: src.X, Y: src.Y, Z: -src.Z})
@@ -183,11 +223,16 @@ func microphoneOf(st *Station, arr *Array) *acoustics.Microphone {
 func (ck *checker) levelCheck(st *Station, arr *Array, t *tally) {
 	st.Levels = make([]Level, 0, len(ck.points))
 	loud := -1
-	bad := false
+	var bad error
 	for k := range ck.points {
 		l, err := ck.levelAt(k, st.Mic)
 		if err != nil {
-			bad = true
+			// one entry per point all the same, never read as predicted
+			nan := math.NaN()
+			st.Levels = append(st.Levels, Level{Point: ck.points[k].Name, OASPL: nan, AWeighted: nan, Peak: nan, Uncertainty: nan})
+			if bad == nil {
+				bad = err
+			}
 			continue
 		}
 		st.Levels = append(st.Levels, Level{Point: ck.points[k].Name, OASPL: l.OASPL, AWeighted: l.AWeighted, Peak: l.Peak, Uncertainty: l.Uncertainty})
@@ -198,9 +243,9 @@ func (ck *checker) levelCheck(st *Station, arr *Array, t *tally) {
 	if st.Kind == Probes {
 		return
 	}
-	if bad || loud < 0 {
+	if bad != nil || loud < 0 {
 		t.add(Check{Name: CheckLevel, Value: math.NaN(), Unit: "dB", Verdict: Blocked,
-			Reason: "the level could not be predicted: the microphone is at the source position"})
+			Reason: fmt.Sprintf("the level could not be predicted: %v", bad)})
 		return
 	}
 	l := st.Levels[loud]

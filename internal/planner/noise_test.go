@@ -91,8 +91,11 @@ func TestMicrophoneFitCheck(t *testing.T) {
 
 // TestRoomLevels checks the reverberant field of a hard-walled room: with
 // less absorption the level rises, the assumed absorption is warned, and a
-// reverberation time gives ᾱ by Sabine's formula (hand-computed:
-// 10 × 10 × 5 m room, V = 500 m³, S = 400 m², T60 = 1 s: ᾱ = 0.20125).
+// reverberation time gives ᾱ by Eyring's formula ᾱ = 1 − exp(−0.161·V/(S·T60))
+// (Eyring 1930, FROM MEMORY, textbook; hand-computed: 10 × 10 × 5 m room,
+// V = 500 m³, S = 400 m², T60 = 1 s: ᾱ = 1 − exp(−0.20125) = 0.18229, where
+// Sabine's formula gives 0.20125), and an average absorption coefficient
+// outside 0.01–0.99 (ours: a plausible range) is refused.
 func TestRoomLevels(t *testing.T) {
 	level := func(n Noise) (float64, *Plan) {
 		req, _ := freeRoom(t)
@@ -113,16 +116,35 @@ func TestRoomLevels(t *testing.T) {
 	if !found {
 		t.Errorf("no warning about the assumed absorption: %v", p.Warnings)
 	}
-	sab, _ := level(Noise{Reverberation: 1})
-	same, _ := level(Noise{RoomAbsorption: 0.161 * 500 / 400})
-	if math.Abs(sab-same) > 1e-9 {
-		t.Errorf("T60 1 s: got %.4f dB, want %.4f dB (ᾱ = 0.20125)", sab, same)
+	eyring, _ := level(Noise{Reverberation: 1})
+	same, _ := level(Noise{RoomAbsorption: 0.182292})
+	if math.Abs(eyring-same) > 1e-4 {
+		t.Errorf("T60 1 s: got %.4f dB, want %.4f dB (ᾱ = 0.18229)", eyring, same)
 	}
-	req, _ := freeRoom(t)
-	req.Cell.Kind = geometry.HardWalled
-	req.Noise = Noise{Reverberation: 0.01}
-	if _, err := New(req); err == nil {
-		t.Error("T60 0.01 s (ᾱ > 1): got no error")
+	for _, n := range []Noise{{Reverberation: 0.01}, {RoomAbsorption: 1e-300}, {RoomAbsorption: 0.995}} {
+		req, _ := freeRoom(t)
+		req.Cell.Kind = geometry.HardWalled
+		req.Noise = n
+		if _, err := New(req); err == nil || !strings.Contains(err.Error(), "0.01–0.99") {
+			t.Errorf("%+v: got %v, want an error naming the plausible range 0.01–0.99", n, err)
+		}
+	}
+}
+
+// TestLevelErrorReason checks that a level that cannot be predicted (a
+// microphone at the source position, where a far-field prediction gives
+// hundreds of dB) blocks the station with the real reason, keeps one level
+// entry per operating point, and never reads as predicted.
+func TestLevelErrorReason(t *testing.T) {
+	req, lc := freeRoom(t)
+	req.Arrays[0].Fixed[0].At = req.Exit.ToCell(geometry.JetPoint{X: lc})
+	p := mustPlan(t, req)
+	c := check(t, p, CheckLevel)
+	if c.Verdict != Blocked || !strings.Contains(c.Reason, "within one jet diameter") {
+		t.Errorf("got %v %q, want blocked: within one jet diameter of the source position", c.Verdict, c.Reason)
+	}
+	if st := p.Stations[0]; len(st.Levels) != len(p.Points) || !math.IsNaN(st.Levels[0].OASPL) {
+		t.Errorf("got levels %+v, want one entry per point (%d), not predicted (NaN)", st.Levels, len(p.Points))
 	}
 }
 

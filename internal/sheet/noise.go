@@ -2,6 +2,7 @@ package sheet
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 
 	"arcwright/internal/planner"
@@ -116,6 +117,10 @@ func (b *builder) levelTable() tableSpec {
 		row := []string{s.ID}
 		unc := 0.0
 		for _, l := range s.Levels {
+			if math.IsNaN(l.OASPL) {
+				row = append(row, "not predicted")
+				continue
+			}
 			row = append(row, fmt.Sprintf("%.0f / %.0f / %.0f", l.OASPL, l.AWeighted, l.Peak))
 			unc = max(unc, l.Uncertainty)
 		}
