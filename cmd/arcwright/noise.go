@@ -72,6 +72,13 @@ shock-containing jets and outside the tables.
 Give the jet as for 'arcwright plume' (flags, or --layout and --point) and the
 receiver with --distance and --polar.
 
+A coaxial jet is not predicted as its fully mixed equivalent alone (a lower
+bound for separate-flow jets) but, band by band, as the larger of the mixed
+jet and the energy sum of its two streams each predicted alone, radiating
+from the end of either the mixed jet's or the primary stream's own potential
+core, whichever is louder; the four-source model of Fisher, Preston & Bryce
+(1998) is not implemented, and the stated uncertainty is 3 dB wider.
+
 Examples:
   arcwright noise --diameter 50.8mm --npr 1.69 --temperature-ratio 1 --distance 5.08m --polar 30deg
   arcwright noise --layout layouts/outdoor-static-pad.yaml --point takeoff --distance 150ft --polar 40 --format json
@@ -135,38 +142,56 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
 		}
 		return err
 	}
-	nj := planner.NoiseJet(p.Exit())
-	src, err := acoustics.NewNoiseSource(nj, atm, acoustics.NoiseBands(nj))
+	src, xss, err := planner.JetNoiseSource(p, atm)
 	if err != nil {
 		return err
 	}
-	xs := p.CoreLength(jet.Nominal)
-	r, th, _ := acoustics.SourceOffset(o.Distance, o.Polar, xs)
-	if !(r > 0) {
-		return fmt.Errorf("--distance %s at --polar %s puts the receiver on the source (the end of the potential core, %s downstream)",
-			units.FormatLength(o.Distance, sys), units.FormatAngleDeg(o.Polar), units.FormatLength(xs, sys))
-	}
-	th = math.Abs(th)
+	// the louder of the candidate source positions (two for a coaxial jet)
 	bands := src.Bands()
-	levels := make([]float64, len(bands))
-	l, err := src.At(acoustics.Path{Distance: r, Polar: th}, levels)
-	if err != nil {
-		return err
+	var best struct {
+		l         acoustics.Levels
+		levels    []float64
+		r, th, xs float64
+	}
+	for i, xs := range xss {
+		r, th, _ := acoustics.SourceOffset(o.Distance, o.Polar, xs)
+		if !(r > 0) {
+			return fmt.Errorf("--distance %s at --polar %s puts the receiver on the source (the end of the potential core, %s downstream)",
+				units.FormatLength(o.Distance, sys), units.FormatAngleDeg(o.Polar), units.FormatLength(xs, sys))
+		}
+		th = math.Abs(th)
+		levels := make([]float64, len(bands))
+		l, err := src.At(acoustics.Path{Distance: r, Polar: th}, levels)
+		if err != nil {
+			return err
+		}
+		if i == 0 || l.OASPL > best.l.OASPL {
+			best.l, best.levels, best.r, best.th, best.xs = l, levels, r, th, xs
+		}
+	}
+	farField := planner.DefaultLimits().FarFieldRatio
+	var near string
+	if ratio := best.r / p.Exit().FullyExpandedDiameter; ratio < farField {
+		near = fmt.Sprintf("the receiver is %.3g Dj from the source, short of the %.0f Dj of the acoustic far field (common practice): the prediction is a far-field one and near-field levels differ.", ratio, farField)
 	}
 	if o.Format == "json" {
-		return export.NoiseJSON(w, l, bands, levels)
+		return export.NoiseJSON(w, best.l, src.Method(), bands, best.levels)
 	}
-	return noiseText(w, src, p, l, levels, r, th, o, atm, sys)
+	return noiseText(w, src, p, best.l, best.levels, best.r, best.th, best.xs, near, o, atm, sys)
 }
 
-func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustics.Levels, levels []float64, r, th float64, o *NoiseOptions, atm acoustics.Atmosphere, sys units.System) error {
+func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustics.Levels, levels []float64, r, th, xs float64, near string, o *NoiseOptions, atm acoustics.Atmosphere, sys units.System) error {
 	e := p.Exit()
 	L := func(m float64) string { return units.FormatLength(m, sys) }
 	fmt.Fprintf(w, "%s nozzle, D %s, Uj %s (Uj/c0 %.2f), Tt %s; air %s, %.0f %% RH, %s\n",
 		p.Nozzle().Kind, L(e.Diameter), units.FormatVelocity(e.Velocity, sys), e.Velocity/atm.SpeedOfSound(),
 		units.FormatTemperature(e.TotalTemperature, sys), units.FormatTemperature(atm.Temperature, sys), atm.RelativeHumidity, units.FormatPressure(atm.Pressure, sys))
 	fmt.Fprintf(w, "Receiver %s from the nozzle exit at %s from the downstream jet axis;\n", L(o.Distance), units.FormatAngleDeg(o.Polar))
-	fmt.Fprintf(w, "  %s from the source at the end of the potential core (%s downstream), at %s.\n\n", L(r), L(p.CoreLength(jet.Nominal)), units.FormatAngleDeg(th))
+	core := "the potential core"
+	if xs != p.CoreLength(jet.Nominal) {
+		core = "the primary stream's own potential core"
+	}
+	fmt.Fprintf(w, "  %s from the source at the end of %s (%s downstream), at %s.\n\n", L(r), core, L(xs), units.FormatAngleDeg(th))
 	total, mixing := src.SoundPower()
 	tw := newTable(w, 0)
 	fmt.Fprintf(tw, "OASPL\t%.1f dB\t± %.0f dB\n", l.OASPL, l.Uncertainty)
@@ -174,7 +199,7 @@ func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustic
 	fmt.Fprintf(tw, "C-weighted peak\t%.1f dB(C)\testimate: C-weighted level %.1f dB + %.0f dB crest factor\n", l.Peak, l.CWeighted, src.CrestFactor())
 	fmt.Fprintf(tw, "Sound power\t%.1f dB re 1 pW\tmixing noise %.1f dB\n", 10*math.Log10(total/acoustics.ReferenceSoundPower), 10*math.Log10(mixing/acoustics.ReferenceSoundPower))
 	tw.Flush()
-	fmt.Fprintf(w, "\nMethod: %s.\n", acoustics.NoiseMethod)
+	fmt.Fprintf(w, "\nMethod: %s.\n", src.Method())
 	fmt.Fprintln(w, "\n1/3-octave spectrum (free field, with air absorption)")
 	tw = newTable(w, 0)
 	fmt.Fprintln(tw, "  band\tcentre, Hz\tdB\tdB(A)\t")
@@ -193,8 +218,8 @@ func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustic
 	tw.Flush()
 	fmt.Fprintln(w, "\nMicrophone: "+acoustics.MicrophoneAdvice(l.OASPL, fTop))
 	notes := src.Notes()
-	if ratio := r / e.FullyExpandedDiameter; ratio < planner.DefaultLimits().FarFieldRatio {
-		notes = append(notes, fmt.Sprintf("the receiver is %.3g Dj from the source, short of the %.0f Dj of the acoustic far field (common practice): the prediction is a far-field one and near-field levels differ.", ratio, planner.DefaultLimits().FarFieldRatio))
+	if near != "" {
+		notes = append(notes, near)
 	}
 	if len(notes) > 0 {
 		fmt.Fprintln(w, "\nNotes")

@@ -89,6 +89,13 @@
 // uncertainty: ±3 dB on OASPL inside the tables' range, wider near the jet
 // axis, for shock-containing jets and outside the tables.
 //
+// A coaxial jet has no single-stream prediction. [NewCoaxialSource] bounds
+// it from three: in every band at every angle the larger of the fully
+// mixed jet (a lower bound for separate-flow jets) and the energy sum of
+// the two streams each predicted alone, with 3 dB more uncertainty and the
+// method named by [NoiseSource.Method] ([CoaxialMethod]); the four-source
+// model of Fisher, Preston & Bryce (1998) is not implemented.
+//
 // # Noise exposure
 //
 // [ClassifyExposure] grades a daily exposure and a peak against the action

@@ -70,10 +70,15 @@ func (j Jet) Validate() error {
 // 20 kHz or Strouhal number 10, whichever is higher (the similarity
 // spectra are more than 15 dB below their peak beyond these Strouhal
 // numbers; 20 Hz–20 kHz covers the A and C weightings), within 1 Hz–1 MHz.
-func NoiseBands(j Jet) []Band {
-	f := j.Velocity / j.Diameter
-	lo := math.Max(math.Min(20, 0.01*f), 1)
-	hi := math.Min(math.Max(20e3, 10*f), 1e6)
+// With more jets (the streams of a coaxial jet) the bands cover them all.
+func NoiseBands(j Jet, more ...Jet) []Band {
+	lo, hi := 20.0, 20e3
+	for _, j := range append([]Jet{j}, more...) {
+		f := j.Velocity / j.Diameter
+		lo = math.Min(lo, 0.01*f)
+		hi = math.Max(hi, 10*f)
+	}
+	lo, hi = math.Max(lo, 1), math.Min(hi, 1e6)
 	if !(lo <= hi) { // NaN from an invalid jet
 		lo, hi = 20, 20e3
 	}
@@ -102,6 +107,9 @@ type NoiseSource struct {
 	beta, crest        float64
 	mixingW, shockPeak float64
 	inRange            bool
+	// parts are the predictions a coaxial source bounds; nil for one jet
+	// (see [NewCoaxialSource]).
+	parts []coaxialPart
 }
 
 // NewNoiseSource predicts the noise of jet j in atmosphere atm over bands
@@ -161,19 +169,7 @@ func NewNoiseSource(j Jet, atm Atmosphere, bands []Band) (*NoiseSource, error) {
 		shock.add(row, th)
 		s.grid[k] = row
 	}
-	// band power: W_b = (2π/(ρ0·c0))·∫ p²r² sin θ dθ, trapezoidal in 1° steps
-	s.power = make([]float64, n)
-	h := math.Pi / angleSteps
-	for k := 0; k <= angleSteps; k++ {
-		wt := h
-		if k == 0 || k == angleSteps {
-			wt = h / 2
-		}
-		sn := math.Sin(float64(k) * h)
-		for b := range bands {
-			s.power[b] += 2 * math.Pi / (s.rho0 * s.c0) * s.grid[k][b] * sn * wt
-		}
-	}
+	s.integratePower()
 	s.alpha = make([]float64, n)
 	s.aw, s.cw = make([]float64, n), make([]float64, n)
 	s.edgeK = make([]float64, n+1)
@@ -188,6 +184,23 @@ func NewNoiseSource(j Jet, atm Atmosphere, bands []Band) (*NoiseSource, error) {
 		s.shockPeak = ShockPeakFrequency(j.Velocity, area, s.beta, s.c0, math.Pi/2)
 	}
 	return s, nil
+}
+
+// integratePower sets the band powers from the grid:
+// W_b = (2π/(ρ0·c0))·∫ p²r² sin θ dθ, trapezoidal in 1° steps.
+func (s *NoiseSource) integratePower() {
+	s.power = make([]float64, len(s.bands))
+	h := math.Pi / angleSteps
+	for k := 0; k <= angleSteps; k++ {
+		wt := h
+		if k == 0 || k == angleSteps {
+			wt = h / 2
+		}
+		sn := math.Sin(float64(k) * h)
+		for b := range s.bands {
+			s.power[b] += 2 * math.Pi / (s.rho0 * s.c0) * s.grid[k][b] * sn * wt
+		}
+	}
 }
 
 // Bands returns the bands of the prediction. The caller must not modify
@@ -216,6 +229,9 @@ func (s *NoiseSource) CrestFactor() float64 { return s.crest }
 // Uncertainty returns the stated uncertainty (±dB on OASPL) at the polar
 // angle thetaJ (rad) from the downstream jet axis.
 func (s *NoiseSource) Uncertainty(thetaJ float64) float64 {
+	if s.parts != nil {
+		return s.coaxialUncertainty(thetaJ)
+	}
 	u := baseUncertainty
 	if thetaJ < nearAxis-1e-9 { // 30° itself is outside, whatever its rounding in radians
 		u += axisUncertainty
@@ -231,6 +247,9 @@ func (s *NoiseSource) Uncertainty(thetaJ float64) float64 {
 
 // Notes returns sentences on where the prediction is weaker than ±3 dB.
 func (s *NoiseSource) Notes() []string {
+	if s.parts != nil {
+		return s.coaxialNotes()
+	}
 	var n []string
 	if !ARP876InRange(s.jet.Velocity, s.c0) {
 		n = append(n, fmt.Sprintf("Uj/c0 = %.2f is outside the ARP 876 tables (0.40–2.51): the tables are held at their ends.", s.jet.Velocity/s.c0))

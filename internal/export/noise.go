@@ -27,9 +27,11 @@ type noiseBandDoc struct {
 const levelDecimals = 2
 
 // NoiseJSON writes the noise command's prediction: the levels l at one
-// receiver and the band levels (dB) at the exact midbands of bands. It
+// receiver by the method named method (the source's
+// [acoustics.NoiseSource.Method]) and the band levels (dB) at the exact
+// midbands of bands. It
 // returns an error when a level is not finite or the lengths differ.
-func NoiseJSON(w io.Writer, l acoustics.Levels, bands []acoustics.Band, levels []float64) error {
+func NoiseJSON(w io.Writer, l acoustics.Levels, method string, bands []acoustics.Band, levels []float64) error {
 	if len(bands) != len(levels) {
 		return fmt.Errorf("export: %d bands but %d band levels", len(bands), len(levels))
 	}
@@ -43,7 +45,7 @@ func NoiseJSON(w io.Writer, l acoustics.Levels, bands []acoustics.Band, levels [
 		AWeighted:   num(roundTo(l.AWeighted, levelDecimals)),
 		Peak:        num(roundTo(l.Peak, levelDecimals)),
 		Uncertainty: num(l.Uncertainty),
-		Method:      acoustics.NoiseMethod,
+		Method:      method,
 		Spectrum:    make([]noiseBandDoc, len(bands)),
 	}
 	for i, b := range bands {

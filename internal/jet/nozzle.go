@@ -22,7 +22,8 @@ const (
 	Rectangular
 	// Coaxial nozzles have a primary (core) stream of diameter Diameter and a
 	// secondary (bypass) annulus of outer diameter SecondaryDiameter; both
-	// streams are convergent. The pair is replaced by a single mixed jet.
+	// streams are convergent. The pair is replaced by a single mixed jet
+	// for the plume; [SeparateStreams] gives each stream alone.
 	Coaxial
 )
 

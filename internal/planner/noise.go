@@ -110,18 +110,22 @@ type noiseModel struct {
 	alpha     float64 // the average absorption coefficient used; 0 without a room
 	assumed   bool    // alpha is DefaultRoomAbsorption
 	hardFloor bool
+
+	// sourceX are the axial source positions of each point, m from the
+	// exit (two for a coaxial jet, see JetNoiseSource).
+	sourceX [][]float64
 }
 
 // newNoiseModel predicts the noise source of every point and the room.
 func newNoiseModel(req *Request, points []PointResult, atm acoustics.Atmosphere) (*noiseModel, error) {
 	m := &noiseModel{hardFloor: req.Cell.Floor == geometry.Hard}
 	for k := range points {
-		j := NoiseJet(points[k].Exit)
-		s, err := acoustics.NewNoiseSource(j, atm, acoustics.NoiseBands(j))
+		s, xs, err := JetNoiseSource(points[k].Plume, atm)
 		if err != nil {
 			return nil, fmt.Errorf("%w: operating point %s: noise: %w", ErrRequest, points[k].Name, err)
 		}
 		m.sources = append(m.sources, s)
+		m.sourceX = append(m.sourceX, xs)
 	}
 	c := &req.Cell
 	volume, surface, ok := RoomSize(c)
@@ -184,18 +188,36 @@ const minSourceDistance = 1.0
 // levelAt predicts the levels of point k at pos (cell frame, m): spherical
 // spreading from the source at the end of the nominal potential core (the
 // source position of the source-offset and floor checks), air absorption,
-// the floor image over a hard floor and the room's reverberant field.
+// the floor image over a hard floor and the room's reverberant field. A
+// coaxial jet has a second candidate source position ([JetNoiseSource]);
+// the louder of the two counts.
 func (ck *checker) levelAt(k int, pos r3.Vec) (acoustics.Levels, error) {
+	var loud acoustics.Levels
+	for i, x := range ck.noise.sourceX[k] {
+		l, err := ck.levelFrom(k, x, pos)
+		if err != nil {
+			return acoustics.Levels{}, err
+		}
+		if i == 0 || l.OASPL > loud.OASPL {
+			loud = l
+		}
+	}
+	return loud, nil
+}
+
+// levelFrom predicts the levels of point k at pos (cell frame, m) from the
+// source at xs on the jet axis (m from the exit).
+func (ck *checker) levelFrom(k int, xs float64, pos r3.Vec) (acoustics.Levels, error) {
 	p := &ck.points[k]
 	f := ck.req.Exit
 	q := f.ToJet(pos)
-	rel := geometry.JetPoint{X: q.X - p.CoreNominal, R: q.R}
+	rel := geometry.JetPoint{X: q.X - xs, R: q.R}
 	path := acoustics.Path{Distance: rel.Distance(), Polar: rel.Polar(), RoomConstant: ck.noise.roomR}
 	if dj := p.Exit.FullyExpandedDiameter; !(path.Distance >= minSourceDistance*dj) {
 		return acoustics.Levels{}, fmt.Errorf("%s from the source position of %s, within one jet diameter (%s): a far-field prediction does not apply there", ck.m(path.Distance), p.Name, ck.m(dj))
 	}
 	if ck.noise.hardFloor && pos.Z >= 0 {
-		src := f.ToCell(geometry.JetPoint{X: p.CoreNominal})
+		src := f.ToCell(geometry.JetPoint{X: xs})
 		d := r3.Sub(pos, r3.Vec{X: src.X, Y: src.Y, Z: -src.Z})
 		path.ImageDistance = r3.Norm(d)
 		if path.ImageDistance > 0 {
