@@ -50,7 +50,7 @@ func (o *NoiseOptions) AddFlags(fs *pflag.FlagSet) {
 	formatFlag(fs, &o.Format, "text", "json")
 }
 
-func newNoiseCommand(stdout io.Writer) *cobra.Command {
+func newNoiseCommand(stdout, stderr io.Writer) *cobra.Command {
 	o := &NoiseOptions{}
 	c := &cobra.Command{
 		Use:   "noise",
@@ -79,6 +79,12 @@ from the end of either the mixed jet's or the primary stream's own potential
 core, whichever is louder; the four-source model of Fisher, Preston & Bryce
 (1998) is not implemented, and the stated uncertainty is 3 dB wider.
 
+A receiver on the nozzle (within one nozzle diameter of the exit centre),
+inside the jet's conservative velocity or hot zone (the outline the planner
+keeps stations out of) or within 2 Dj of the noise source is refused as a
+command-line error; one nearer than the acoustic far field (50 Dj from the
+source) is predicted with a warning on standard error.
+
 Examples:
   arcwright noise --diameter 50.8mm --npr 1.69 --temperature-ratio 1 --distance 5.08m --polar 30deg
   arcwright noise --layout layouts/outdoor-static-pad.yaml --point takeoff --distance 150ft --polar 40 --format json
@@ -89,7 +95,7 @@ facility's procedures, local codes and licensed practice.
 Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
 		Args: noArgs,
 		RunE: func(cmd *cobra.Command, args []string) error {
-			return runNoise(o, cmd.Flags(), stdout)
+			return runNoise(o, cmd.Flags(), stdout, stderr)
 		},
 	}
 	o.AddFlags(c.Flags())
@@ -99,7 +105,7 @@ Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
 // noiseCaution is printed under every text prediction.
 const noiseCaution = "The levels are estimates with the stated uncertainty. Hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice."
 
-func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
+func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w, stderr io.Writer) error {
 	if !fs.Changed("distance") {
 		return usageError{errors.New("--distance is required: the receiver's distance from the nozzle exit, e.g. --distance 5.08m")}
 	}
@@ -146,6 +152,9 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
 	if err != nil {
 		return err
 	}
+	if err := receiverOutsideJet(o, p, xss, sys); err != nil {
+		return err
+	}
 	// the louder of the candidate source positions (two for a coaxial jet)
 	bands := src.Bands()
 	var best struct {
@@ -155,10 +164,6 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
 	}
 	for i, xs := range xss {
 		r, th, _ := acoustics.SourceOffset(o.Distance, o.Polar, xs)
-		if !(r > 0) {
-			return fmt.Errorf("--distance %s at --polar %s puts the receiver on the source (the end of the potential core, %s downstream)",
-				units.FormatLength(o.Distance, sys), units.FormatAngleDeg(o.Polar), units.FormatLength(xs, sys))
-		}
 		th = math.Abs(th)
 		levels := make([]float64, len(bands))
 		l, err := src.At(acoustics.Path{Distance: r, Polar: th}, levels)
@@ -173,11 +178,51 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w io.Writer) error {
 	var near string
 	if ratio := best.r / p.Exit().FullyExpandedDiameter; ratio < farField {
 		near = fmt.Sprintf("the receiver is %.3g Dj from the source, short of the %.0f Dj of the acoustic far field (common practice): the prediction is a far-field one and near-field levels differ.", ratio, farField)
+		fmt.Fprintln(stderr, "arcwright: warning: "+near)
 	}
 	if o.Format == "json" {
 		return export.NoiseJSON(w, best.l, src.Method(), bands, best.levels)
 	}
 	return noiseText(w, src, p, best.l, best.levels, best.r, best.th, best.xs, near, o, atm, sys)
+}
+
+// noiseMinSourceDj is the distance from the source position, in fully
+// expanded diameters, inside which the noise command refuses a receiver:
+// the source region of the mixing noise itself spans several Dj along the
+// axis about the end of the potential core (common practice), so a
+// spherical-spreading prediction from a point there has no meaning.
+const noiseMinSourceDj = 2
+
+// receiverOutsideJet returns a command-line error naming --distance and
+// --polar when the receiver is within one nozzle diameter of the exit
+// centre (the nozzle itself), on or inside the conservative velocity or hot
+// zone of plume p (the outline the planner keeps stations out of, without
+// the layout's margin), or within noiseMinSourceDj of a source position in
+// xss (m downstream of the exit).
+func receiverOutsideJet(o *NoiseOptions, p *jet.Plume, xss []float64, sys units.System) error {
+	L := func(m float64) string { return units.FormatLength(m, sys) }
+	at := fmt.Sprintf("--distance %s at --polar %s puts the receiver", L(o.Distance), units.FormatAngleDeg(o.Polar))
+	d := p.Exit().Diameter
+	if o.Distance < d {
+		return usageError{fmt.Errorf("%s within one nozzle diameter (%s) of the centre of the nozzle exit, on the nozzle: give a receiver outside the jet and clear of the nozzle", at, L(d))}
+	}
+	x, r := o.Distance*math.Cos(o.Polar), o.Distance*math.Sin(o.Polar)
+	for _, z := range []struct {
+		name string
+		zone jet.Zone
+	}{{"velocity zone", jet.VelocityZone}, {"hot zone", jet.HotZone}} {
+		env := p.Envelope(z.zone, jet.Conservative)
+		if env.Length > 0 && env.Clearance(x, r) <= 0 {
+			return usageError{fmt.Errorf("%s inside the jet's conservative %s (it reaches %s downstream; the outline the planner keeps stations out of): the prediction is a far-field one; give a receiver outside the jet", at, z.name, L(env.Length))}
+		}
+	}
+	dj := p.Exit().FullyExpandedDiameter
+	for _, xs := range xss {
+		if math.Hypot(x-xs, r) < noiseMinSourceDj*dj {
+			return usageError{fmt.Errorf("%s within %d Dj (%s) of the noise source at the end of the potential core, %s downstream: the prediction is a far-field one; give a receiver farther out", at, noiseMinSourceDj, L(noiseMinSourceDj*dj), L(xs))}
+		}
+	}
+	return nil
 }
 
 func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustics.Levels, levels []float64, r, th, xs float64, near string, o *NoiseOptions, atm acoustics.Atmosphere, sys units.System) error {

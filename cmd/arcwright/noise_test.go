@@ -248,3 +248,57 @@ func TestNoiseCoaxialConservative(t *testing.T) {
 		}
 	}
 }
+
+// TestNoiseReceiverRefused checks that a receiver inside the jet's
+// conservative velocity or hot zone (the outline the planner keeps
+// stations out of), within 2 Dj of the source position or within one
+// nozzle diameter of the exit is refused as a command-line error (exit 2)
+// naming --distance and --polar, before any prediction is printed. The
+// reviewer's case: 50.8 mm, NPR 1.69, cold, 0.2586 m on the axis (5.1 D,
+// inside the potential core of about 6 D, common practice) gave 202.5 dB.
+func TestNoiseReceiverRefused(t *testing.T) {
+	jetFlags := []string{"noise", "--diameter", "50.8mm", "--npr", "1.69", "--temperature-ratio", "1", "--format", "json"}
+	with := func(more ...string) []string { return append(append([]string{}, jetFlags...), more...) }
+	tests := []struct {
+		name string
+		args []string
+		want string
+	}{
+		{"in the potential core", with("--distance", "0.2586m", "--polar", "0"), "--distance 258.6 mm at --polar 0.0° puts the receiver inside the jet's conservative velocity zone"},
+		{"at the source", with("--distance", "258.6mm", "--polar", "0deg"), "inside the jet's conservative velocity zone"},
+		{"in the mixing layer", with("--distance", "1m", "--polar", "3"), "inside the jet's conservative"},
+		{"at the nozzle", with("--distance", "30mm", "--polar", "180"), "within one nozzle diameter"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.name, func(t *testing.T) {
+			out, errOut, code := arc(t, tt.args...)
+			if code != exitUsage || !strings.Contains(errOut, tt.want) || !strings.Contains(errOut, "--polar") || out != "" {
+				t.Errorf("got exit %d, stdout %q, stderr %q; want exit %d, no output and %q", code, out, errOut, exitUsage, tt.want)
+			}
+		})
+	}
+}
+
+// TestNoiseNearFieldWarning checks that a receiver outside the jet but
+// nearer than the acoustic far field (50 Dj from the source, common
+// practice) is warned about on stderr in JSON mode too, while stdout stays
+// one clean JSON document; a far-field receiver gets no warning.
+func TestNoiseNearFieldWarning(t *testing.T) {
+	jetFlags := []string{"noise", "--diameter", "50.8mm", "--npr", "1.69", "--temperature-ratio", "1", "--format", "json", "--polar", "90"}
+	for _, tt := range []struct {
+		dist string
+		warn bool
+	}{{"1m", true}, {"5.08m", false}} {
+		out, errOut, code := arc(t, append(append([]string{}, jetFlags...), "--distance", tt.dist)...)
+		if code != exitOK {
+			t.Fatalf("%s: exit %d: %s", tt.dist, code, errOut)
+		}
+		var doc map[string]any
+		if err := json.Unmarshal([]byte(out), &doc); err != nil {
+			t.Errorf("%s: stdout is not one JSON document: %v", tt.dist, err)
+		}
+		if got := strings.Contains(errOut, "warning:") && strings.Contains(errOut, "far field"); got != tt.warn {
+			t.Errorf("%s: stderr %q, want a far-field warning: %v", tt.dist, errOut, tt.warn)
+		}
+	}
+}

@@ -128,7 +128,7 @@ codes and licensed practice.`,
 	root.SetVersionTemplate("arcwright {{.Version}}\n")
 	root.AddCommand(
 		newPlumeCommand(stdout),
-		newNoiseCommand(stdout),
+		newNoiseCommand(stdout, stderr),
 		newAirCommand(stdout),
 		newValidateCommand(stdout),
 		newInitCommand(stdout),
