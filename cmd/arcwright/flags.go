@@ -25,6 +25,10 @@ type quantityFlag struct {
 	doubt func(v float64) string
 	// plausible, when set, is the range every value must lie in.
 	plausible *layout.Range
+	// unitRequired, when set, says why a bare number is refused: the
+	// value must carry its unit (lengths only: the message suggests m and
+	// ft).
+	unitRequired string
 }
 
 func newQuantity(dim units.Dim, bare string, value *float64, def string) *quantityFlag {
@@ -45,6 +49,9 @@ func (q *quantityFlag) Set(s string) error {
 	v, err := units.Parse(s, q.dim, q.bare)
 	if err != nil {
 		return err
+	}
+	if _, perr := strconv.ParseFloat(strings.TrimSpace(s), 64); perr == nil && q.unitRequired != "" {
+		return fmt.Errorf("%q has no unit; give one, e.g. %sm or %sft (%s)", s, strings.TrimSpace(s), strings.TrimSpace(s), q.unitRequired)
 	}
 	if _, perr := strconv.ParseFloat(strings.TrimSpace(s), 64); perr == nil && q.doubt != nil {
 		if why := q.doubt(v); why != "" {

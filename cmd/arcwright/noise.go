@@ -38,12 +38,12 @@ func (o *NoiseOptions) AddFlags(fs *pflag.FlagSet) {
 		fs.AddFlag(f)
 	})
 	dist := newQuantity(units.Length, "", &o.Distance, "")
-	dist.doubt = doubtful(0, 2000, "m")
+	dist.unitRequired = "the level goes with 20·log10 of the distance: metres and feet differ by 10 dB"
 	dist.plausible = &layout.Range{What: "distance", Min: 0, Max: layout.MaxLength, MinOpen: true, Unit: "m", Show: layout.MetricLength}
-	fs.Var(dist, "distance", "distance of the receiver from the centre of the nozzle exit, e.g. 5.08m or 150ft")
+	fs.Var(dist, "distance", "distance of the receiver from the centre of the nozzle exit, with its unit, e.g. 5.08m or 150ft")
 	polar := newQuantity(units.Angle, "deg", &o.Polar, "90deg")
 	polar.plausible = &layout.Range{What: "polar angle from the downstream jet axis", Min: 0, Max: math.Pi, Show: units.FormatAngleDeg}
-	fs.Var(polar, "polar", "polar angle of the receiver from the downstream jet axis, e.g. 30deg (a bare number is in degrees)")
+	fs.Var(polar, "polar", "polar angle of the receiver from the downstream jet axis, even with a from_inlet layout, e.g. 30deg (a bare number is in degrees)")
 	hum := newQuantity(units.Fraction, "%", &o.Humidity, "70%")
 	hum.plausible = &layout.Range{What: "relative humidity", Min: 0, Max: 1, Show: func(v float64) string { return strconv.FormatFloat(100*v, 'g', 4, 64) + " %" }}
 	fs.Var(&percentFlag{hum}, "humidity", "relative humidity of the air in percent, e.g. 70% (without a layout)")
@@ -70,7 +70,13 @@ assumes a free field (the plan adds the floor and the room). Expect about
 shock-containing jets and outside the tables.
 
 Give the jet as for 'arcwright plume' (flags, or --layout and --point) and the
-receiver with --distance and --polar.
+receiver with --distance and --polar. --distance is measured from the centre
+of the nozzle exit and needs its unit (5.08m, 150ft): the level goes with
+20·log10 of the distance, so a bare number read as metres where feet were
+meant would be 10 dB off, whatever unit the layout uses. --polar is always
+from the downstream jet axis (0° looks down the exhaust), even when the
+layout counts its angles from the inlet (polar_angle: from_inlet; there
+40° from the inlet is --polar 140); a bare number is in degrees.
 
 A coaxial jet is not predicted as its fully mixed equivalent alone (a lower
 bound for separate-flow jets) but, band by band, as the larger of the mixed
@@ -87,7 +93,7 @@ source) is predicted with a warning on standard error.
 
 Examples:
   arcwright noise --diameter 50.8mm --npr 1.69 --temperature-ratio 1 --distance 5.08m --polar 30deg
-  arcwright noise --layout layouts/outdoor-static-pad.yaml --point takeoff --distance 150ft --polar 40 --format json
+  arcwright noise --layout layouts/outdoor-static-pad.yaml --point P-185 --distance 150ft --polar 140 --format json
 
 The levels are estimates. Hearing protection and exclusion zones follow the
 facility's procedures, local codes and licensed practice.

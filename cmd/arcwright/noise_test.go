@@ -82,6 +82,11 @@ func TestNoiseErrors(t *testing.T) {
 		{"polar beyond 180", append(append([]string{}, jetFlags...), "--distance", "5m", "--polar", "200deg"), exitUsage, `"--polar" flag: the polar angle from the downstream jet axis 200.0° is implausible; want 0.0° to 180.0°`},
 		{"humidity with a layout", []string{"noise", "--layout", filepath.Join(demoDir, "anechoic-model-jet.yaml"), "--point", "CS-060", "--distance", "3m", "--humidity", "50%"}, exitUsage, "--humidity"},
 		{"humidity out of range", append(append([]string{}, jetFlags...), "--distance", "5m", "--humidity", "150%"), exitUsage, `"--humidity" flag: the relative humidity 150 % is implausible; want 0 % to 100 %`},
+		// a bare distance is refused, with or without a feet layout: the
+		// level goes with 20·log10 r (inverse-square law, common practice)
+		// and 150 m against 150 ft is 10.3 dB (DERIVED)
+		{"bare distance", append(append([]string{}, jetFlags...), "--distance", "150"), exitUsage, `"150" has no unit; give one, e.g. 150m or 150ft`},
+		{"bare distance with a feet layout", []string{"noise", "--layout", filepath.Join(demoDir, "outdoor-static-pad.yaml"), "--point", "P-185", "--distance", "150", "--polar", "140"}, exitUsage, `"150" has no unit`},
 		{"plume's table flag", append(append([]string{}, jetFlags...), "--distance", "5m", "--at", "1m"), exitUsage, "unknown flag"},
 	}
 	for _, tt := range tests {
@@ -299,6 +304,22 @@ func TestNoiseNearFieldWarning(t *testing.T) {
 		}
 		if got := strings.Contains(errOut, "warning:") && strings.Contains(errOut, "far field"); got != tt.warn {
 			t.Errorf("%s: stderr %q, want a far-field warning: %v", tt.dist, errOut, tt.warn)
+		}
+	}
+}
+
+// TestNoiseHelpConventions checks that the help says --polar is from the
+// downstream jet axis whatever the layout's convention, that --distance
+// needs its unit, and how coaxial jets and near receivers are handled.
+func TestNoiseHelpConventions(t *testing.T) {
+	out, _, code := arc(t, "noise", "--help")
+	if code != exitOK {
+		t.Fatalf("exit %d", code)
+	}
+	flat := strings.Join(strings.Fields(out), " ")
+	for _, want := range []string{"always from the downstream jet axis", "from_inlet", "needs its unit", "coaxial jet", "refused"} {
+		if !strings.Contains(flat, want) {
+			t.Errorf("help lacks %q:\n%s", want, out)
 		}
 	}
 }

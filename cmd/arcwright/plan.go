@@ -77,7 +77,7 @@ standard output instead of the summary.
 
 Examples:
   arcwright plan layouts/anechoic-model-jet.yaml --pdf sheet.pdf
-  arcwright plan layout.yaml --csv stations.csv --geojson plan.geojson --paper Tabloid --scale 1:50
+  arcwright plan layout.yaml --pdf sheet.pdf --csv stations.csv --geojson plan.geojson --paper Tabloid --scale 1:50
 
 Exit status: 0 when the plan is made (blocked stations are part of the
 answer; use 'arcwright check' as a gate), 1 on bad input or a failed write,
