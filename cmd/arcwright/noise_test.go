@@ -273,6 +273,9 @@ func TestNoiseReceiverRefused(t *testing.T) {
 		{"at the source", with("--distance", "258.6mm", "--polar", "0deg"), "inside the jet's conservative velocity zone"},
 		{"in the mixing layer", with("--distance", "1m", "--polar", "3"), "inside the jet's conservative"},
 		{"at the nozzle", with("--distance", "30mm", "--polar", "180"), "within one nozzle diameter"},
+		// outside the zones but 1.8 Dj from the end of the 258.6 mm core
+		// (DERIVED: hypot(270 cos 20° − 258.6, 270 sin 20°) = 92 mm)
+		{"near the source", with("--distance", "270mm", "--polar", "20"), "within 2 Dj (101.6 mm) of the noise source at the end of the potential core"},
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
