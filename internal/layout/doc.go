@@ -35,9 +35,12 @@
 //	crew              where people stay during runs: name, at, height, hours
 //
 // A microphone is a nominal size ("1/4 in", whose typical limits apply) or
-// a map of size, max_level (dB) and upper_frequency. Levels are numbers of
-// dB ("165 dB", "95 dB(A)"); hours are a number of hours, "2 h" or
-// "30 min".
+// a map of size, max_level (dB) and upper_frequency. A microphone's
+// max_level is unweighted ("165 dB", dB re 20 µPa) and noise.contours are
+// A-weighted ("95 dB(A)"); a bare number is read in the key's own
+// weighting and a level in another weighting is an error. A contour given
+// twice, or at the 85 dB(A) always drawn, is dropped with a warning. Hours
+// are a number of hours, "2 h" or "30 min".
 //
 // [Starter] returns a complete, commented layout that explains every key; it
 // is the reference of the format.

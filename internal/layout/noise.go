@@ -2,6 +2,7 @@ package layout
 
 import (
 	"math"
+	"slices"
 	"strconv"
 	"strings"
 
@@ -68,7 +69,15 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 	}
 	items, _ := d.list(s.get("contours"), s.field("contours"), s.keyLine("contours"), "a list of A-weighted levels, such as [80 dB(A), 95 dB(A)]")
 	for i, it := range items {
-		if v, ok := d.level(it, index(s.field("contours"), i)); ok {
+		field := index(s.field("contours"), i)
+		v, ok := d.level(it, field, aWeighted)
+		switch {
+		case !ok:
+		case v == planner.ContourA:
+			d.warnf(it.Line, field, "%g dB(A) is drawn anyway; dropped", v)
+		case slices.Contains(n.Contours, v):
+			d.warnf(it.Line, field, "%g dB(A) is already in the list; dropped", v)
+		default:
 			n.Contours = append(n.Contours, v)
 		}
 	}
@@ -150,7 +159,7 @@ func (d *decoder) microphone(n *yaml.Node, field string) (*acoustics.Microphone,
 		ok = ok && good
 	}
 	if v := s.get("max_level"); v != nil {
-		l, good := d.level(v, s.field("max_level"))
+		l, good := d.level(v, s.field("max_level"), unweighted)
 		m.MaxLevel = l
 		ok = ok && good
 	}
@@ -173,23 +182,55 @@ func (d *decoder) microphone(n *yaml.Node, field string) (*acoustics.Microphone,
 	return m, ok
 }
 
-// level reads a level in dB: a number, or a number followed by dB, dB(A),
-// dBA, dB(C) or dBC.
-func (d *decoder) level(n *yaml.Node, field string) (float64, bool) {
-	s, ok := d.scalar(n, field, "a level in dB, such as 85 dB(A)")
+// weighting is the frequency weighting a level key takes.
+type weighting int
+
+const (
+	// aWeighted: a number, or a number followed by dB(A) or dBA.
+	aWeighted weighting = iota
+	// unweighted: a number, or a number followed by dB (dB re 20 µPa).
+	unweighted
+)
+
+// levelUnits are the unit suffixes of a level, longest first, with their
+// weighting: 'A', 'C' or 0 (unweighted).
+var levelUnits = []struct {
+	suffix string
+	w      byte
+}{{"dB(A)", 'A'}, {"dB(C)", 'C'}, {"dBA", 'A'}, {"dBC", 'C'}, {"dB", 0}}
+
+// level reads a level in dB with weighting w: a number, or a number
+// followed by the unit of w. A level in another weighting is an error: a
+// C-weighted contour is not drawn as dB(A), and a microphone's limit is
+// unweighted.
+func (d *decoder) level(n *yaml.Node, field string, w weighting) (float64, bool) {
+	example := "85 dB(A)"
+	if w == unweighted {
+		example = "146 dB"
+	}
+	s, ok := d.scalar(n, field, "a level in dB, such as "+example)
 	if !ok {
 		return 0, false
 	}
 	t := strings.TrimSpace(s)
-	for _, suf := range []string{"dB(A)", "dB(C)", "dBA", "dBC", "dB"} {
-		if strings.HasSuffix(t, suf) {
-			t = strings.TrimSpace(strings.TrimSuffix(t, suf))
-			break
+	for _, u := range levelUnits {
+		if !strings.HasSuffix(t, u.suffix) {
+			continue
 		}
+		switch {
+		case w == aWeighted && u.w != 'A':
+			d.errorf(ErrInvalid, n.Line, field, "contours are A-weighted levels, got %q: write a level in dB(A), such as 95 dB(A) (the 140 dB(C) peak contour is always drawn)", s)
+			return 0, false
+		case w == unweighted && u.w != 0:
+			d.errorf(ErrInvalid, n.Line, field, "a microphone's upper limit is an unweighted level (dB re 20 µPa), got %q: write it in dB, such as 146 dB", s)
+			return 0, false
+		}
+		t = strings.TrimSpace(strings.TrimSuffix(t, u.suffix))
+		break
 	}
 	v, err := strconv.ParseFloat(t, 64)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
-		d.errorf(ErrInvalid, n.Line, field, "want a level in dB, such as 85 dB(A), got %q", s)
+		d.errorf(ErrInvalid, n.Line, field, "want a level in dB, such as %s, got %q", example, s)
 		return 0, false
 	}
 	if v < minLevel || v > maxLevel {

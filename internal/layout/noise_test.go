@@ -55,6 +55,14 @@ func TestNoiseKeyErrors(t *testing.T) {
 		{"limits missing", "    stand: tripod\n    microphone: {max_level: 150 dB}\n", "give a nominal size"},
 		{"bad level", "    stand: tripod\n    microphone: {size: 1/4 in, max_level: loud}\n", "want a level in dB"},
 		{"implausible level", "noise:\n  contours: [500 dB(A)]\n", "noise.contours[0]: the level 500 dB is implausible"},
+		// contours are A-weighted; a C-weighted or unweighted value is not
+		// silently drawn as dB(A)
+		{"C-weighted contour", "noise:\n  contours: [135 dB(C)]\n", "noise.contours[0]: contours are A-weighted levels, got \"135 dB(C)\""},
+		{"dBC contour", "noise:\n  contours: [95 dBA, 137 dBC]\n", "noise.contours[1]: contours are A-weighted levels"},
+		{"unweighted contour", "noise:\n  contours: [95 dB]\n", "noise.contours[0]: contours are A-weighted levels"},
+		// a microphone's upper limit is unweighted, dB re 20 µPa
+		{"weighted max_level", "    stand: tripod\n    microphone: {size: 1/4 in, max_level: 130 dB(A), upper_frequency: 100 kHz}\n", "arrays[0].microphone.max_level: a microphone's upper limit is an unweighted level"},
+		{"dBC max_level", "    stand: tripod\n    microphone: {size: 1/4 in, max_level: 150 dBC, upper_frequency: 100 kHz}\n", "arrays[0].microphone.max_level: a microphone's upper limit is an unweighted level"},
 		{"both room keys", "noise:\n  room_absorption: 0.1\n  reverberation_time: 2 s\n", "give room_absorption or reverberation_time, not both"},
 		// the plausible range 0.01–0.99 is ours (a guard against slips)
 		{"absorption above 1", "noise:\n  room_absorption: 1.5\n", "noise.room_absorption: want an average absorption coefficient from 0.01 to 0.99"},
@@ -84,8 +92,17 @@ func TestNoiseKeyErrors(t *testing.T) {
 			}
 		})
 	}
+	// a repeated contour, or the 85 dB(A) always drawn, is dropped with a
+	// warning naming it
+	req, warns := mustDecode(t, baseLayout+"noise:\n  contours: [95 dB(A), 85 dB(A), 95]\n")
+	if c := req.Noise.Contours; len(c) != 1 || c[0] != 95 {
+		t.Errorf("contours: got %v, want [95]", c)
+	}
+	if len(warns) != 2 || !strings.Contains(warns[0].String(), "noise.contours[1]: 85 dB(A) is drawn anyway; dropped") || !strings.Contains(warns[1].String(), "noise.contours[2]: 95 dB(A) is already in the list; dropped") {
+		t.Errorf("got warnings %v, want two naming the dropped contours", warns)
+	}
 	// the room's absorption outside a hard-walled cell is a warning
-	_, warns := mustDecode(t, baseLayout+"noise:\n  room_absorption: 0.1\n")
+	_, warns = mustDecode(t, baseLayout+"noise:\n  room_absorption: 0.1\n")
 	if len(warns) != 1 || !strings.Contains(warns[0].String(), "only for a hard-walled cell") {
 		t.Errorf("got warnings %v, want one about the hard-walled cell", warns)
 	}
