@@ -24,9 +24,16 @@ const (
 	shockUncertainty = 2.0 // shock-containing jets (shock noise, screech not modelled)
 	rangeUncertainty = 3.0 // velocity or temperature outside the tables
 	nearAxis         = 30 * math.Pi / 180
-	// maxTableTemperatureRatio is the largest Tt/T0 of the ARP 876
-	// spectral tables, 3.5 (noise-and-exposure.md §1, READ).
+	// minTableTemperatureRatio and maxTableTemperatureRatio are the ends
+	// of Tt/T0 in the ARP 876 spectral tables, 1 and 3.5
+	// (noise-and-exposure.md §1, READ): a jet colder than the ambient is
+	// outside them.
+	minTableTemperatureRatio = 1.0
 	maxTableTemperatureRatio = 3.5
+	// ratioRoundOff is the relative round-off allowed on Tt/T0 at the
+	// tables' lower end, so that an unheated jet given at the ambient
+	// temperature counts as inside.
+	ratioRoundOff = 1e-9
 )
 
 // Crest factors (peak over rms) for the C-weighted peak estimate, dB: 12 dB
@@ -129,7 +136,7 @@ func NewNoiseSource(j Jet, atm Atmosphere, bands []Band) (*NoiseSource, error) {
 	area := math.Pi * j.Diameter * j.Diameter / 4
 	vr := j.Velocity / s.c0
 	tt := j.TotalTemperature / atm.Temperature
-	s.inRange = ARP876InRange(j.Velocity, s.c0) && tt <= maxTableTemperatureRatio
+	s.inRange = ARP876InRange(j.Velocity, s.c0) && temperatureInTables(tt)
 	s.mixingW = MixingPower(j.Velocity, j.Density, area, s.rho0, s.c0)
 	if !j.ShockFree {
 		s.beta = ShockParameter(j.Mach, j.DesignMach)
@@ -203,6 +210,12 @@ func (s *NoiseSource) integratePower() {
 	}
 }
 
+// temperatureInTables reports whether the total-temperature ratio tt lies
+// within the ARP 876 tables (ends included).
+func temperatureInTables(tt float64) bool {
+	return tt >= minTableTemperatureRatio*(1-ratioRoundOff) && tt <= maxTableTemperatureRatio
+}
+
 // Bands returns the bands of the prediction. The caller must not modify
 // the slice.
 func (s *NoiseSource) Bands() []Band { return s.bands }
@@ -254,8 +267,12 @@ func (s *NoiseSource) Notes() []string {
 	if !ARP876InRange(s.jet.Velocity, s.c0) {
 		n = append(n, fmt.Sprintf("Uj/c0 = %.2f is outside the ARP 876 tables (0.40–2.51): the tables are held at their ends.", s.jet.Velocity/s.c0))
 	}
-	if tt := s.jet.TotalTemperature / s.atm.Temperature; tt > maxTableTemperatureRatio {
-		n = append(n, fmt.Sprintf("Tt/T0 = %.2f is above the 3.5 of the ARP 876 tables.", tt))
+	if tt := s.jet.TotalTemperature / s.atm.Temperature; !temperatureInTables(tt) {
+		side := "above the 3.5"
+		if tt < maxTableTemperatureRatio {
+			side = "below the 1"
+		}
+		n = append(n, fmt.Sprintf("Tt/T0 = %.2f is %s of the ARP 876 tables (1–3.5).", tt, side))
 	}
 	if s.beta > 0 {
 		n = append(n, fmt.Sprintf("shock-containing jet (β = %.2f): shock-associated noise peaks near %s at 90°; screech tones are not modelled.", s.beta, frequencyWords(s.shockPeak)))

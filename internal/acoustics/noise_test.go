@@ -2,6 +2,7 @@ package acoustics
 
 import (
 	"math"
+	"strings"
 	"testing"
 )
 
@@ -415,5 +416,37 @@ func TestLevelFallsWithDistance(t *testing.T) {
 				prev = l
 			}
 		}
+	}
+}
+
+// TestTableTemperatureRange checks that a jet whose total temperature is
+// below the ambient (Tt/T0 < 1) is flagged outside the ARP 876 tables,
+// which run over Tt/T0 from 1 to 3.5 (noise-and-exposure.md §1, READ): its
+// uncertainty widens by the out-of-range allowance and a note says why,
+// like a jet above 3.5.
+func TestTableTemperatureRange(t *testing.T) {
+	in := mustSource(t, isothermalJet(0.8, 0.05))
+	base := in.Uncertainty(math.Pi / 2)
+	for _, tt := range []struct {
+		name  string
+		ratio float64
+		out   bool
+	}{{"ambient", 1, false}, {"hot", 3, false}, {"below ambient", 0.8, true}, {"above the tables", 3.6, true}} {
+		t.Run(tt.name, func(t *testing.T) {
+			j := isothermalJet(0.8, 0.05)
+			j.TotalTemperature = tt.ratio * ambient15.Temperature
+			s := mustSource(t, j)
+			want := base
+			if tt.out {
+				want += rangeUncertainty
+			}
+			if got := s.Uncertainty(math.Pi / 2); got != want {
+				t.Errorf("Tt/T0 %g: got ±%g dB, want ±%g dB", tt.ratio, got, want)
+			}
+			noted := strings.Contains(strings.Join(s.Notes(), " "), "Tt/T0")
+			if noted != tt.out {
+				t.Errorf("Tt/T0 %g: notes %q, want a note on the temperature ratio: %v", tt.ratio, s.Notes(), tt.out)
+			}
+		})
 	}
 }
