@@ -48,7 +48,11 @@
 //
 // A crew entry, one per crew position and operating point, gives name,
 // point, a_weighted_db, peak_db (the C-weighted peak estimate),
-// allowed_hours (NIOSH REL) and status (ok, warn, blocked).
+// allowed_hours (NIOSH REL, capped at 24: a day or more; 0 where the level
+// could not be predicted) and status (ok, warn, blocked; warn also where
+// the level plus its stated uncertainty reaches an action value, blocked
+// whatever the noise where a person standing there is inside a velocity or
+// hot zone or its margin).
 //
 // An array gives its kind, radius, centre, whether the planner chose the
 // radius, the largest radius (arcs only, else null), the clearest polar

@@ -73,7 +73,8 @@ type CrewExposure struct {
 	Peak        float64 // C-weighted peak estimate, dB(C)
 	// DailyExposure is L_EX,8h for Hours at AWeighted, dB(A).
 	DailyExposure float64
-	// AllowedHours is the time allowed at AWeighted under the NIOSH REL, h.
+	// AllowedHours is the time allowed at AWeighted under the NIOSH REL,
+	// h, at most MaxAllowedHours.
 	AllowedHours float64
 	Class        acoustics.ExposureClass
 	// InZone is true when a person standing here is inside (or within the
@@ -369,7 +370,7 @@ func (ck *checker) crewExposures() []CrewExposure {
 func (ck *checker) grade(e *CrewExposure, l acoustics.Levels) {
 	e.AWeighted, e.Peak = l.AWeighted, l.Peak
 	e.DailyExposure = acoustics.DailyExposure(l.AWeighted, e.Hours)
-	e.AllowedHours = acoustics.NIOSHAllowedHours(l.AWeighted)
+	e.AllowedHours = math.Min(acoustics.NIOSHAllowedHours(l.AWeighted), MaxAllowedHours)
 	e.Class = acoustics.ClassifyExposure(e.DailyExposure, e.Peak)
 	over := e.Hours > e.AllowedHours
 	switch {
@@ -382,7 +383,27 @@ func (ck *checker) grade(e *CrewExposure, l acoustics.Levels) {
 	}
 	e.Reason = fmt.Sprintf("%.0f dB(A) (±%.0f dB), peak about %.0f dB(C): L_EX,8h %.0f dB(A) over %s h, %s (EU 2003/10/EC); NIOSH allows %s",
 		l.AWeighted, l.Uncertainty, l.Peak, e.DailyExposure, hoursWords(e.Hours), e.Class, units.FormatHours(e.AllowedHours))
+	// the estimate's upper end: a prediction is uncertain, and the limits
+	// are not to be met only on the central value
+	hi := l.Uncertainty
+	upper := acoustics.ClassifyExposure(e.DailyExposure+hi, e.Peak+hi)
+	overHi := e.Hours > acoustics.NIOSHAllowedHours(l.AWeighted+hi) || e.Peak+hi >= acoustics.NIOSHCeilingPeak
+	switch {
+	case upper > e.Class:
+		e.Reason += fmt.Sprintf("; with the ±%.0f dB of the estimate, %s", hi, upper)
+	case overHi && !over:
+		e.Reason += fmt.Sprintf("; with the ±%.0f dB of the estimate, the NIOSH limit is passed", hi)
+	default:
+		return
+	}
+	if e.Status == OK {
+		e.Status = Warn
+	}
 }
+
+// MaxAllowedHours caps the NIOSH allowed time reported for a crew
+// position, h: a day (tables print "> 24 h"; hours per day are at most 24).
+const MaxAllowedHours = 24.0
 
 // crewBodyRadius is the radius of the column a person standing at a crew
 // position takes up, from the floor to the ears, m: 0.25 m, about half a

@@ -196,3 +196,43 @@ func TestCrewInZone(t *testing.T) {
 		}
 	}
 }
+
+// TestCrewUncertainty checks that a crew position whose central estimate
+// is below the EU lower action value (80 dB(A) L_EX,8h; acoustics.md §7.1,
+// CONFIRMED) but whose estimate plus its stated uncertainty reaches it is
+// warned, and the reason says so: the hours are chosen so that the central
+// L_EX,8h is 80 dB(A) less half the uncertainty (DERIVED from
+// L_EX,8h = L_A + 10·log10(T/8 h)).
+func TestCrewUncertainty(t *testing.T) {
+	req, lc := freeRoom(t)
+	at := r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 3, Z: req.Exit.Exit.Z}
+	req.Crew = []Crew{{Name: "probe", At: at, Hours: 8}}
+	e := mustPlan(t, req).Crew[0]
+	u := e.AWeighted - e.DailyExposure // 0 for 8 h
+	levels, err := New(req)
+	if err != nil {
+		t.Fatal(err)
+	}
+	unc := levels.Stations[0].Levels[0].Uncertainty
+	hours := 8 * math.Pow(10, (80-unc/2-e.AWeighted+u)/10)
+	req.Crew[0].Hours = hours
+	e = mustPlan(t, req).Crew[0]
+	if !(e.DailyExposure < 80 && e.DailyExposure+unc >= 80) || e.Peak+unc >= 135 || hours > e.AllowedHours {
+		t.Fatalf("set-up: L_EX,8h %.1f ± %.0f dB(A), peak %.0f dB(C), %.3g h of %.3g h allowed: want only the uncertainty to reach 80 dB(A)", e.DailyExposure, unc, e.Peak, hours, e.AllowedHours)
+	}
+	if e.Status != Warn || !strings.Contains(e.Reason, "with the ±") {
+		t.Errorf("got %v %q, want warn, the reason naming the uncertainty", e.Status, e.Reason)
+	}
+}
+
+// TestCrewAllowedHoursCap checks that the NIOSH allowed time is capped at
+// a day (24 h), as the tables print "> 24 h": a quiet position far from
+// the jet would otherwise be allowed months.
+func TestCrewAllowedHoursCap(t *testing.T) {
+	req, lc := freeRoom(t)
+	req.Crew = []Crew{{Name: "far", At: r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y + 2000, Z: 1.6}, Hours: 8}}
+	e := mustPlan(t, req).Crew[0]
+	if e.AllowedHours != MaxAllowedHours || MaxAllowedHours != 24 {
+		t.Errorf("got %g h allowed at %.0f dB(A), want the cap of 24 h", e.AllowedHours, e.AWeighted)
+	}
+}
