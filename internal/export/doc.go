@@ -78,8 +78,11 @@
 // in metres (planar X and Y from the cell datum, not longitude and
 // latitude), which the foreign member "coordinate_frame" states. Each feature
 // has a "layer" property: boundary, obstacle, keep_out, collector, mark,
-// nozzle, jet_axis, zone, arc, station and stand_base. Polygon rings are
-// closed and counter-clockwise (RFC 7946 §3.1.6).
+// nozzle, jet_axis, zone, arc, station and stand_base, and with levels
+// crew and noise_contour. A crew point carries the position's worst
+// exposure over the operating points: the worst status, and of equal
+// statuses the loudest dB(A), with that point's name and levels. Polygon
+// rings are closed and counter-clockwise (RFC 7946 §3.1.6).
 //
 // # Files
 //

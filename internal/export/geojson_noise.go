@@ -7,12 +7,15 @@ import (
 	"arcwright/internal/planner"
 )
 
-// addCrew adds a point per crew position with its loudest exposure.
+// addCrew adds a point per crew position with its worst exposure over
+// the operating points: the worst status, and of equal statuses the
+// loudest dB(A).
 func (c *collection) addCrew(p *planner.Plan) {
 	for i := 0; i < len(p.Crew); {
 		j, loud := i, i
 		for ; j < len(p.Crew) && p.Crew[j].Name == p.Crew[i].Name; j++ {
-			if !(p.Crew[j].AWeighted <= p.Crew[loud].AWeighted) {
+			e, w := &p.Crew[j], &p.Crew[loud]
+			if e.Status > w.Status || e.Status == w.Status && !(e.AWeighted <= w.AWeighted) {
 				loud = j
 			}
 		}

@@ -304,3 +304,23 @@ func freeZones(fs []*geojson.Feature) []*geojson.Feature {
 	}
 	return out
 }
+
+// TestGeoJSONCrewWorstStatus: a crew position's feature carries the worst
+// status over the operating points, not the status of the loudest one (a
+// quieter point whose zone reaches the position blocks it), with that
+// point and its levels.
+func TestGeoJSONCrewWorstStatus(t *testing.T) {
+	p := fixturePlan(t)
+	p.Crew = []planner.CrewExposure{
+		{Name: "desk", Point: "loud", AWeighted: 95, Peak: 120, Hours: 1, AllowedHours: 2.5, Status: planner.Warn},
+		{Name: "desk", Point: "bent", AWeighted: 80, Peak: 100, Hours: 1, AllowedHours: 24, Status: planner.Blocked, InZone: true},
+		{Name: "desk", Point: "quiet", AWeighted: 70, Peak: 90, Hours: 1, AllowedHours: 24, Status: planner.OK},
+	}
+	crew := byLayer(t, writeGeoJSON(t, p))["crew"]
+	if len(crew) != 1 {
+		t.Fatalf("got %d crew features, want 1", len(crew))
+	}
+	if pr := crew[0].Properties; pr["status"] != "blocked" || pr["point"] != "bent" || pr["a_weighted_db"] != 80.0 {
+		t.Errorf("got status %v for %v at %v dB(A), want blocked for bent at 80", pr["status"], pr["point"], pr["a_weighted_db"])
+	}
+}
