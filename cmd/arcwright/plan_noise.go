@@ -55,11 +55,15 @@ func planNoiseText(w io.Writer, p *planner.Plan) {
 		tw.Flush()
 	}
 	if len(p.Crew) > 0 {
-		fmt.Fprintln(w, "\nCrew positions (EU 2003/10/EC action 80/85 dB(A), limit 87 dB(A) and 140 dB(C) peak; NIOSH 85 dB(A), 3-dB exchange)")
+		fmt.Fprintln(w, "\nCrew positions (EU 2003/10/EC action 80/85 dB(A) and 135/137 dB(C) peak, limit 87 dB(A) and 140 dB(C) peak; NIOSH 85 dB(A), 3-dB exchange)")
 		tw := newTable(w, 0)
 		fmt.Fprintln(tw, "  position\tpoint\tdB(A)\tpeak dB(C)\thours\tNIOSH allows\tstatus\t")
 		for _, e := range p.Crew {
-			fmt.Fprintf(tw, "  %s\t%s\t%.0f\t%.0f\t%.3g h\t%s\t%s\t\n", e.Name, e.Point, e.AWeighted, e.Peak, e.Hours, units.FormatHours(e.AllowedHours), e.Status)
+			status := e.Status.String()
+			if e.InZone {
+				status += ": in a zone, no one may stand here during runs"
+			}
+			fmt.Fprintf(tw, "  %s\t%s\t%.0f\t%.0f\t%.3g h\t%s\t%s\t\n", e.Name, e.Point, e.AWeighted, e.Peak, e.Hours, units.FormatHours(e.AllowedHours), status)
 		}
 		tw.Flush()
 	}

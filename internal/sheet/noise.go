@@ -142,7 +142,10 @@ func (b *builder) crewTable() tableSpec {
 	}
 	for _, e := range b.plan.Crew {
 		status := e.Status.String()
-		if e.Status == planner.Blocked {
+		switch {
+		case e.InZone:
+			status = "KEEP OUT"
+		case e.Status == planner.Blocked:
 			status = "LIMIT"
 		}
 		t.rows = append(t.rows, []string{e.Name, b.pr.cell(e.At.X), b.pr.cell(e.At.Y), e.Point, fmt.Sprintf("%.0f", e.AWeighted), fmt.Sprintf("%.0f", e.Peak),

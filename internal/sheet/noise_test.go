@@ -29,6 +29,10 @@ func TestNoiseOnTheSheet(t *testing.T) {
 		st.Checks = append(append([]planner.Check(nil), st.Checks...), planner.Check{Name: planner.CheckLevel, Value: 120, Unit: "dB", Verdict: planner.OK, Point: p.Points[0].Name, Reason: "fits"})
 	}
 	p.Crew = []planner.CrewExposure{{Name: "desk", Point: p.Points[0].Name, At: req.Crew[0].At, Hours: 2, AWeighted: 110, Peak: 125, AllowedHours: 0.1, Status: planner.Blocked, Reason: "passes the limit"}}
+	if len(p.Points) > 1 {
+		// a position inside a zone reads "KEEP OUT", not only "LIMIT"
+		p.Crew = append(p.Crew, planner.CrewExposure{Name: "desk", Point: p.Points[1].Name, At: req.Crew[0].At, Hours: 2, AWeighted: 100, Peak: 115, AllowedHours: 1, Status: planner.Blocked, InZone: true, Reason: "inside the velocity zone"})
+	}
 	m := build(t, p, sheet.Options{})
 	styles := map[sheet.Style]int{}
 	for _, v := range m.Pages[0].Views {
@@ -62,6 +66,15 @@ func TestNoiseOnTheSheet(t *testing.T) {
 		if !ok {
 			t.Errorf("no %s table", name)
 			continue
+		}
+		if name == "crew" && len(p.Points) > 1 {
+			var status []string
+			for _, r := range tb.Rows {
+				status = append(status, strings.Join(r.Cells[8], " "))
+			}
+			if len(status) != 2 || status[0] != "LIMIT" || status[1] != "KEEP OUT" {
+				t.Errorf("crew table status: got %q, want LIMIT, then KEEP OUT for the position in a zone", status)
+			}
 		}
 		if name == "levels" && rows[name] != len(p.Stations) {
 			t.Errorf("levels table: got %d rows, want %d", rows[name], len(p.Stations))
