@@ -59,10 +59,13 @@ func ExamplePlan_NoiseMap() {
 	for _, c := range m.Contours {
 		fmt.Printf("%s: %d lines, everywhere %v\n", c.Label(), len(c.Lines), c.Everywhere)
 	}
+	// The door warns: 88 dB(A) for 1 h is an L_EX,8h of 79 dB(A), and the
+	// estimate's stated uncertainty reaches the 80 dB(A) action value.
+	//
 	// Output:
 	// side: 97 dB OASPL, 96 dB(A), peak 107 dB(C)
 	// aft: 105 dB OASPL, 105 dB(A), peak 117 dB(C)
-	// crew door: 88 dB(A), NIOSH allows 4.2 h, ok
+	// crew door: 88 dB(A), NIOSH allows 4.2 h, warn
 	// 85 dB(A): 0 lines, everywhere true
 	// 140 dB(C) peak: 1 lines, everywhere false
 }
