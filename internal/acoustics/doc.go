@@ -79,7 +79,10 @@
 // [NoiseSource.At] propagates it along a [Path]: spherical spreading from
 // the source position, ISO 9613-1 absorption per band, the floor image over
 // a hard floor (the band average of the coherent sum: +6 dB flush, tending
-// to the energy sum's +3 dB), and the reverberant field 4·ρ0·c0·W/R of a
+// to the energy sum's +3 dB) or over soft ground such as grass (per band the
+// larger of that and the energy sum: conservative; no ground-impedance
+// model such as Delany & Bazley 1970 is used), and the reverberant field
+// 4·ρ0·c0·W/R of a
 // hard-walled room ([RoomConstant]; [EyringAbsorption] turns a reverberation
 // time into ᾱ by Eyring's formula, which, unlike Sabine's, stays below 1
 // and does not overstate the absorption of a dead room). It gives

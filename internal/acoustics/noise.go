@@ -287,9 +287,16 @@ type Path struct {
 	// Polar is the polar angle of the receiver seen from the source, from
 	// the downstream jet axis, rad.
 	Polar float64
-	// ImageDistance and ImagePolar describe the path reflected by a hard
+	// ImageDistance and ImagePolar describe the path reflected by the
 	// floor (image source); ImageDistance 0 means no floor reflection.
 	ImageDistance, ImagePolar float64
+	// SoftFloor marks a finite-impedance floor (grass, soil): each band
+	// takes the larger of the rigid floor's coherent sum and the energy sum
+	// of the two paths (incoherent image, +3 dB for equal paths). Real
+	// ground is nearly rigid at low frequencies and fills in the nulls
+	// higher up; no ground-impedance model (such as Delany & Bazley 1970)
+	// is used, so the result errs high (conservative).
+	SoftFloor bool
 	// RoomConstant is R = S·ᾱ/(1 − ᾱ) of a hard-walled room, m²; 0 means
 	// no reverberant field (free field or anechoic).
 	RoomConstant float64
@@ -352,6 +359,9 @@ func (s *NoiseSource) At(p Path, band []float64) (Levels, error) {
 			avg := 1.0
 			if dk := (s.edgeK[b+1] - s.edgeK[b]) * delta; imaged && dk > 0 {
 				avg = (nextSin - prevSin) / dk
+			}
+			if p.SoftFloor {
+				avg = math.Max(avg, 0) // at least the energy sum
 			}
 			p2 += q + 2*math.Sqrt(d*q)*avg
 		}

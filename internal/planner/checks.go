@@ -638,6 +638,9 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 		case !hard:
 			t.offer(gc, func(c Check) (reason string) {
 				reason = fmt.Sprintf("%s floor: no coherent floor reflection assumed", req.Cell.Floor)
+				if req.Cell.Floor == geometry.Grass {
+					reason = "grass floor: no null predicted (finite-impedance ground); the levels add the floor image, at least its energy (up to +3 dB)"
+				}
 				return
 			})
 		case flush:

@@ -106,11 +106,11 @@ func NoiseJet(e jet.Exit) acoustics.Jet {
 // noiseModel holds what level predictions share: one source per operating
 // point, the room constant and the floor.
 type noiseModel struct {
-	sources   []*acoustics.NoiseSource
-	roomR     float64 // room constant, m²; 0 without a reverberant field
-	alpha     float64 // the average absorption coefficient used; 0 without a room
-	assumed   bool    // alpha is DefaultRoomAbsorption
-	hardFloor bool
+	sources []*acoustics.NoiseSource
+	roomR   float64 // room constant, m²; 0 without a reverberant field
+	alpha   float64 // the average absorption coefficient used; 0 without a room
+	assumed bool    // alpha is DefaultRoomAbsorption
+	floor   geometry.Surface
 
 	// sourceX are the axial source positions of each point, m from the
 	// exit (two for a coaxial jet, see JetNoiseSource).
@@ -119,7 +119,7 @@ type noiseModel struct {
 
 // newNoiseModel predicts the noise source of every point and the room.
 func newNoiseModel(req *Request, points []PointResult, atm acoustics.Atmosphere) (*noiseModel, error) {
-	m := &noiseModel{hardFloor: req.Cell.Floor == geometry.Hard}
+	m := &noiseModel{floor: req.Cell.Floor}
 	for k := range points {
 		s, xs, err := JetNoiseSource(points[k].Plume, atm)
 		if err != nil {
@@ -189,7 +189,9 @@ const minSourceDistance = 1.0
 // levelAt predicts the levels of point k at pos (cell frame, m): spherical
 // spreading from the source at the end of the nominal potential core (the
 // source position of the source-offset and floor checks), air absorption,
-// the floor image over a hard floor and the room's reverberant field. A
+// the floor image (over a hard floor the band-averaged coherent sum; over
+// grass at least the energy sum, see acoustics.Path.SoftFloor; none over a
+// treated floor) and the room's reverberant field. A
 // coaxial jet has a second candidate source position ([JetNoiseSource]);
 // the louder of the two counts.
 func (ck *checker) levelAt(k int, pos r3.Vec) (acoustics.Levels, error) {
@@ -217,7 +219,8 @@ func (ck *checker) levelFrom(k int, xs float64, pos r3.Vec) (acoustics.Levels, e
 	if dj := p.Exit.FullyExpandedDiameter; !(path.Distance >= minSourceDistance*dj) {
 		return acoustics.Levels{}, fmt.Errorf("%s from the source position of %s, within one jet diameter (%s): a far-field prediction does not apply there", ck.m(path.Distance), p.Name, ck.m(dj))
 	}
-	if ck.noise.hardFloor && pos.Z >= 0 {
+	if fl := ck.noise.floor; (fl == geometry.Hard || fl == geometry.Grass) && pos.Z >= 0 {
+		path.SoftFloor = fl == geometry.Grass
 		src := f.ToCell(geometry.JetPoint{X: xs})
 		d := r3.Sub(pos, r3.Vec{X: src.X, Y: src.Y, Z: -src.Z})
 		path.ImageDistance = r3.Norm(d)

@@ -236,3 +236,38 @@ func TestCrewAllowedHoursCap(t *testing.T) {
 		t.Errorf("got %g h allowed at %.0f dB(A), want the cap of 24 h", e.AllowedHours, e.AWeighted)
 	}
 }
+
+// TestGrassFloorLevels checks that a grass floor adds the floor image (at
+// least its energy, +3 dB for equal paths; acoustics.md §3.1, FROM MEMORY,
+// high): real ground is nearly rigid at low frequencies, so leaving the
+// image out reads up to 3–6 dB low. A treated floor adds none, and a
+// hard floor's coherent sum is never above grass's.
+func TestGrassFloorLevels(t *testing.T) {
+	level := func(f geometry.Surface) (float64, float64) {
+		req, lc := freeRoom(t)
+		req.Cell.Floor = f
+		req.Crew = []Crew{{Name: "c", At: r3.Vec{X: req.Exit.Exit.X + lc, Y: req.Exit.Exit.Y - 3, Z: req.Exit.Exit.Z}, Hours: 1}}
+		p := mustPlan(t, req)
+		return check(t, p, CheckLevel).Value, p.Crew[0].AWeighted
+	}
+	treated, treatedA := level(geometry.Treated)
+	grass, grassA := level(geometry.Grass)
+	hard, hardA := level(geometry.Hard)
+	// mic and source at the same height h, 3 m apart: image path
+	// √(9 + 4h²); the energy sum adds 10·log10(1 + 9/(9 + 4h²)) (DERIVED)
+	req, _ := freeRoom(t)
+	h := req.Exit.Exit.Z
+	energy := 10 * math.Log10(1+9/(9+4*h*h))
+	for _, c := range []struct {
+		name         string
+		treated, got float64
+		hard         float64
+	}{{"station OASPL", treated, grass, hard}, {"crew dB(A)", treatedA, grassA, hardA}} {
+		if d := c.got - c.treated; d < energy-0.05 || d > 6.03 {
+			t.Errorf("%s: grass adds %+.2f dB over a treated floor, want from the energy sum %+.2f dB to +6.02 dB", c.name, d, energy)
+		}
+		if c.hard > c.got+1e-9 {
+			t.Errorf("%s: hard floor %.2f dB above grass %.2f dB", c.name, c.hard, c.got)
+		}
+	}
+}
