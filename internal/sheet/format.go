@@ -14,9 +14,6 @@ import (
 type printer struct {
 	sys  units.System
 	conv planner.Convention
-	// siteFeet prints the plan's callouts in decimal feet ("147.6'"), as
-	// site plans drawn at an engineer's scale are dimensioned.
-	siteFeet bool
 }
 
 // metric reports whether lengths print in metres.
@@ -60,60 +57,14 @@ func (p printer) length(m float64) string {
 // notation as length, one notation in text and drawing.
 func (p printer) short(m float64) string { return p.length(m) }
 
-// dim prints a length (m) for a callout on the plan: as length, or in
-// decimal feet to 0.1 ft on a site plan drawn at an engineer's scale.
-func (p printer) dim(m float64) string {
-	if p.siteFeet && !p.metric() && finite(m) {
-		return fixed(m/units.Foot, 1) + "'"
-	}
-	return p.length(m)
-}
-
-// tapeFine is the length up to which feet and inches are printed to the
-// nearest 1/8 in; beyond it to the nearest inch, as a tape is read over a
-// long pull (common practice): 100 ft.
-const tapeFine = 100 * units.Foot
+// dim prints a length (m) for a callout on the plan: as length, one
+// notation in text and drawing (a site plan too: decimal feet such as
+// 147.6' read as 147' 6" on site).
+func (p printer) dim(m float64) string { return p.length(m) }
 
 // tape prints a finite length (m) in feet and inches as a tape reads:
-// 147' 7-5/8" (to 1/8 in up to 100 ft), 2005' 3" (to the inch beyond),
-// 7-7/8" (no "0'"), 12' 0"; a minus sign in front of a negative one.
-func tape(m float64) string {
-	if !finite(m) {
-		return units.FormatLength(m, units.Imperial)
-	}
-	a := math.Abs(m)
-	per := 8.0 // parts of an inch
-	if a >= tapeFine {
-		per = 1
-	}
-	n := math.Round(a / units.Inch * per) // parts
-	if n == 0 {
-		return `0"`
-	}
-	ft := math.Floor(n / (12 * per))
-	rest := n - ft*12*per
-	in := math.Floor(rest / per)
-	num := int(rest - in*per)
-	den := int(per)
-	for num != 0 && num%2 == 0 {
-		num, den = num/2, den/2
-	}
-	inch := strconv.FormatFloat(in, 'f', 0, 64)
-	switch {
-	case num != 0 && in == 0:
-		inch = fmt.Sprintf("%d/%d", num, den)
-	case num != 0:
-		inch += fmt.Sprintf("-%d/%d", num, den)
-	}
-	out := inch + `"`
-	if ft > 0 {
-		out = strconv.FormatFloat(ft, 'f', 0, 64) + "' " + out
-	}
-	if m < 0 {
-		out = "-" + out
-	}
-	return out
-}
+// units.FormatLength, the one imperial notation (147' 8", 7-7/8", 0").
+func tape(m float64) string { return units.FormatLength(m, units.Imperial) }
 
 // temp prints a temperature (K).
 func (p printer) temp(k float64) string { return units.FormatTemperature(k, p.sys) }

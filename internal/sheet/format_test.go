@@ -34,9 +34,11 @@ func TestTape(t *testing.T) {
 			t.Errorf("%.6f m: got %s, want %s", tt.m, got, tt.want)
 		}
 	}
-	p := printer{sys: units.Imperial, siteFeet: true}
-	if got := p.dim(45); got != "147.6'" {
-		t.Errorf("site plan callout of 45 m: got %s, want 147.6' (hand-computed 45/0.3048 = 147.64)", got)
+	// One notation in text and drawing, on a site plan too: 147.6' reads
+	// as 147' 6" on site (review of the pad plan).
+	p := printer{sys: units.Imperial}
+	if got := p.dim(45); got != `147' 8"` {
+		t.Errorf("site plan callout of 45 m: got %s, want 147' 8\" (hand-computed 45/0.3048 = 147.64 ft)", got)
 	}
 	if got := p.length(45); got != `147' 8"` {
 		t.Errorf("text of 45 m: got %s, want 147' 8\" (147.64 ft, to the inch beyond 100 ft)", got)

@@ -7,7 +7,6 @@ import (
 
 	"arcwright/internal/geometry"
 	"arcwright/internal/planner"
-	"arcwright/internal/units"
 )
 
 // planView is the plan being drawn: its frame, transform, shapes, labels and
@@ -96,7 +95,6 @@ func (b *builder) planPage(asked int, field string) error {
 	b.cropped = fit.cropped
 	// a feet-and-inches plan at an engineer's scale is a site plan: its
 	// callouts are in decimal feet (common practice)
-	b.pr.siteFeet = b.req.Units == units.Imperial && scale >= 120
 	cx, cy := (ext.Min[0]+ext.Max[0])/2, (ext.Min[1]+ext.Max[1])/2
 	v := &planView{
 		b: b, frame: vf,

@@ -38,11 +38,14 @@ func huge(v float64) (string, bool) {
 // "50.8 mm", resolution 0.1 mm; from 1 m in metres with three decimals,
 // "5.080 m", resolution 1 mm.
 //
-// Imperial: feet and inches rounded to the nearest 1/16 in, the fraction
-// reduced, inches always below 12: "16 ft 8 in", "2 ft 0 in",
-// "0 ft 1-15/16 in", "2 ft 1/2 in", and for negative values
-// "-3 ft 2-1/2 in" (the sign applies to the whole). Resolution 1/16 in.
-// From HugeValue (metres or feet) on, "1.000e+300 m" or "3.281e+300 ft".
+// Imperial: feet and inches as a tape is read, the one notation of every
+// imperial output (tables, plan labels, set-up steps, reasons, summaries):
+// to the nearest 1/8 in up to [TapeFine] (100 ft), to the nearest inch
+// beyond, the fraction reduced, inches always below 12, no "0'" in front of
+// inches alone: 16' 8", 2' 0", 7-7/8", 147' 8", 2005' 3", 0", and for
+// negative values -3' 2-1/2" (the sign applies to the whole). Resolution
+// 1/8 in, or 1 in from 100 ft. From HugeValue (metres or feet) on,
+// "1.000e+300 m" or "3.281e+300 ft".
 func FormatLength(m float64, sys System) string {
 	mustSystem("FormatLength", sys)
 	if math.IsNaN(m) || math.IsInf(m, 0) {
@@ -67,13 +70,22 @@ func FormatLength(m float64, sys System) string {
 	return withSign(m < 0, strconv.FormatFloat(a, 'f', 3, 64)+" m")
 }
 
-// feetAndInches prints a non-negative finite length a (m) as feet, inches and
-// sixteenths.
+// TapeFine is the length up to which FormatLength prints feet and inches to
+// the nearest 1/8 in; beyond it to the nearest inch, as a tape is read over
+// a long pull (common practice): 100 ft.
+const TapeFine = 100 * Foot
+
+// feetAndInches prints a non-negative finite length a (m) as a tape reads
+// it (see FormatLength).
 func feetAndInches(a float64) string {
-	n := math.Round(a / Inch * 16) // sixteenths of an inch; below 2⁵³ from HugeValue
-	ft := math.Floor(n / 192)
-	rem := int(n - ft*192) // exact: n and ft*192 are integers below 2⁵³
-	in, num, den := rem/16, rem%16, 16
+	per := 8.0 // parts of an inch
+	if a >= TapeFine {
+		per = 1
+	}
+	n := math.Round(a / Inch * per) // parts; below 2⁵³ from HugeValue
+	ft := math.Floor(n / (12 * per))
+	rem := int(n - ft*12*per) // exact: integers below 2⁵³
+	in, num, den := rem/int(per), rem%int(per), int(per)
 	if num != 0 {
 		g := gcd(num, den)
 		num, den = num/g, den/g
@@ -87,7 +99,10 @@ func feetAndInches(a float64) string {
 	default:
 		inch = fmt.Sprintf("%d-%d/%d", in, num, den)
 	}
-	return strconv.FormatFloat(ft, 'f', 0, 64) + " ft " + inch + " in"
+	if ft == 0 {
+		return inch + `"`
+	}
+	return strconv.FormatFloat(ft, 'f', 0, 64) + "' " + inch + `"`
 }
 
 // FormatTemperature prints an absolute temperature given in kelvin, with one
@@ -205,7 +220,7 @@ func withSign(neg bool, s string) string {
 }
 
 // isZeroText reports whether s shows no digit other than zero ("0.0 mm",
-// "0 ft 0 in", "0.00"); no unit symbol contains a digit.
+// 0", "0.00"); no unit symbol contains a digit.
 func isZeroText(s string) bool {
 	for _, r := range s {
 		if r >= '1' && r <= '9' {

@@ -51,21 +51,26 @@ func TestFormatLengthMetric(t *testing.T) {
 
 func TestFormatLengthImperial(t *testing.T) {
 	// Hand-computed from 1 in = 0.0254 m, 1 ft = 0.3048 m (1959 agreement,
-	// CONFIRMED): e.g. 5.08 m / 0.0254 = 200 in = 16 ft 8 in.
+	// CONFIRMED): e.g. 5.08 m / 0.0254 = 200 in = 16' 8". Rounded as a tape
+	// is read (common practice): to 1/8 in up to 100 ft, to the inch beyond.
 	checkFormat(t, "FormatLength", inSystem(FormatLength, Imperial), []formatCase{
-		{"whole inches", 5.08, "16 ft 8 in"},
-		{"whole feet", 0.6096, "2 ft 0 in"},
-		{"fifteen sixteenths", 0.0492125, "0 ft 1-15/16 in"},
-		{"half inch reduced", 0.6223, "2 ft 1/2 in"},
-		{"negative", -0.9779, "-3 ft 2-1/2 in"},
-		{"feet inches fraction", 3.8227, "12 ft 6-1/2 in"},
-		{"quarter", 0.3048 + 0.25*0.0254, "1 ft 1/4 in"},
-		{"eighth", 3*0.0254 + 0.0254/8, "0 ft 3-1/8 in"},
-		// 11 in + 31.9/32 in rounds up to 12 in, which carries into the feet.
-		{"carry into feet", 0.3048 + 11.997*0.0254, "2 ft 0 in"},
-		{"rounds to sixteenth", 0.0254 * (1 + 5.2/16), "0 ft 1-5/16 in"},
-		{"zero", 0, "0 ft 0 in"},
-		{"negative rounds to zero", -0.0001, "0 ft 0 in"},
+		{"whole inches", 5.08, `16' 8"`},
+		{"whole feet", 0.6096, `2' 0"`},
+		{"fifteen sixteenths rounds to the eighth", 0.0492125, `2"`},
+		{"seven eighths", 0.0254 * 7.875, `7-7/8"`},
+		{"half inch reduced", 0.6223, `2' 1/2"`},
+		{"negative", -0.9779, `-3' 2-1/2"`},
+		{"feet inches fraction", 3.8227, `12' 6-1/2"`},
+		{"quarter", 0.3048 + 0.25*0.0254, `1' 1/4"`},
+		{"eighth", 3*0.0254 + 0.0254/8, `3-1/8"`},
+		{"carry into feet", 0.3048 + 11.997*0.0254, `2' 0"`},
+		{"rounds to eighth", 0.0254 * (1 + 5.2/16), `1-3/8"`},
+		// 147.6 ft = 44.99 m (hand-computed): beyond 100 ft to the inch.
+		{"beyond 100 ft to the inch", 147*0.3048 + 7.6*0.0254, `147' 8"`},
+		{"just below 100 ft keeps eighths", 99*0.3048 + 11.5*0.0254, `99' 11-1/2"`},
+		{"2005 ft", 2005*0.3048 + 3.2*0.0254, `2005' 3"`},
+		{"zero", 0, `0"`},
+		{"negative rounds to zero", -0.0001, `0"`},
 		// 1e20 m = 3.28084e20 ft (hand-computed): from HugeValue, e-notation.
 		{"huge", 1e20, "3.281e+20 ft"},
 		{"huge negative", -1e300, "-3.281e+300 ft"},

@@ -83,7 +83,10 @@ func checkLengthRoundTrip(t *testing.T, v float64) {
 			t.Errorf("Parse(FormatLength(%v, %v) = %q): got error %v, want nil", v, sys, s, err)
 			continue
 		}
-		half := Inch / 32 // half of 1/16 in
+		half := Inch / 16 // half of 1/8 in
+		if math.Abs(v) >= TapeFine-Inch {
+			half = Inch / 2 // half of 1 in from 100 ft
+		}
 		if sys == Metric {
 			half = 0.5e-3 // half of 1 mm; 0.05 mm below 1 m
 			if strings.HasSuffix(s, " mm") {

@@ -60,7 +60,12 @@ func TestRoundTripLength(t *testing.T) {
 		}
 		return 0.5e-3 + slack*math.Abs(v) // half of 1 mm
 	})
-	checkRoundTrip(t, "imperial", values, inSystem(FormatLength, Imperial), Length, fixedTol(Inch/32)) // half of 1/16 in
+	checkRoundTrip(t, "imperial", values, inSystem(FormatLength, Imperial), Length, func(v float64, _ string) float64 {
+		if math.Abs(v) >= TapeFine-Inch {
+			return Inch/2 + slack*math.Abs(v) // half of 1 in
+		}
+		return Inch/16 + slack*math.Abs(v) // half of 1/8 in
+	})
 }
 
 func TestRoundTripTemperature(t *testing.T) {

@@ -13,7 +13,8 @@ type System int
 const (
 	// Metric prints metres (millimetres below 1 m), °C, kPa and m/s.
 	Metric System = iota + 1
-	// Imperial prints feet and inches to 1/16 in, °F, psi and ft/s.
+	// Imperial prints feet and inches as a tape reads (1/8 in, 1 in from
+	// 100 ft), °F, psi and ft/s.
 	Imperial
 )
 

@@ -36,10 +36,10 @@ func ExampleFormatLength() {
 		fmt.Printf("%-10s %s\n", units.FormatLength(m, units.Metric), units.FormatLength(m, units.Imperial))
 	}
 	// Output:
-	// 5.080 m    16 ft 8 in
-	// 50.8 mm    0 ft 2 in
-	// 49.2 mm    0 ft 1-15/16 in
-	// -977.9 mm  -3 ft 2-1/2 in
+	// 5.080 m    16' 8"
+	// 50.8 mm    2"
+	// 49.2 mm    2"
+	// -977.9 mm  -3' 2-1/2"
 }
 
 func ExampleParseSystem() {
