@@ -39,7 +39,7 @@
 // max_level is unweighted ("165 dB", dB re 20 µPa) and noise.contours are
 // A-weighted ("95 dB(A)"); a bare number is read in the key's own
 // weighting and a level in another weighting is an error. A contour given
-// twice, or at the 85 dB(A) always drawn, is dropped with a warning. Hours
+// twice, or at the 85 dB(A) always drawn, is an error. Hours
 // are a number of hours, "2 h" or "30 min".
 //
 // [Starter] returns a complete, commented layout that explains every key; it

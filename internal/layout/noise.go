@@ -74,9 +74,9 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 		switch {
 		case !ok:
 		case v == planner.ContourA:
-			d.warnf(it.Line, field, "%g dB(A) is drawn anyway; dropped", v)
+			d.errorf(ErrInvalid, it.Line, field, "%g dB(A) is always drawn: remove it from the list", v)
 		case slices.Contains(n.Contours, v):
-			d.warnf(it.Line, field, "%g dB(A) is already in the list; dropped", v)
+			d.errorf(ErrInvalid, it.Line, field, "%g dB(A) is already in the list: give each contour once", v)
 		default:
 			n.Contours = append(n.Contours, v)
 		}
