@@ -12,6 +12,10 @@ import (
 	"testing"
 	"time"
 
+	"github.com/paulmach/orb"
+
+	"arcwright/internal/geometry"
+	"arcwright/internal/jet"
 	"arcwright/internal/planner"
 	"arcwright/internal/sheet"
 )
@@ -232,6 +236,9 @@ func TestWarningsOnSheetOne(t *testing.T) {
 		t.Run(tt.name, func(t *testing.T) {
 			p := tt.plan(t)
 			p.Warnings = append(p.Warnings, "P: the velocity zone reaches the floor about 9 m downstream of the exit: the exhaust spreads along it there as a wall jet")
+			// the sheet marks what the planner reports where it reports it
+			at := p.Request.Exit.ToCell(geometry.JetPoint{X: 9})
+			p.Impingements = append(p.Impingements, planner.Impingement{Point: "P", Zone: jet.VelocityZone, Surface: planner.SurfaceFloor, X: 9, At: orb.Point{at.X, at.Y}})
 			m := build(t, p, sheet.Options{})
 			pg := m.Pages[0]
 			var words []string
