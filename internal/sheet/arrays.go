@@ -260,10 +260,15 @@ func markRadius(pts []Pt) float64 {
 	if len(pts) < 2 {
 		return 1.1
 	}
+	// the median matters only between 0.5/0.4 and 1.1/0.4 mm: each
+	// distance is looked for no nearer than 1.2 mm and no farther than
+	// 2.8 mm, which keeps a dense crowd from searching all round each
+	// station (the median of the distances so found is the true one, or
+	// lies on the same side of that range)
 	t := newPointTree(pts)
 	var nn []float64
 	for _, p := range pts {
-		if d := t.nearestBeyond(p, 0.2); !math.IsInf(d, 1) {
+		if d := t.nearestBeyond(p, 0.2, 1.2, 2.8); !math.IsInf(d, 1) {
 			nn = append(nn, d)
 		}
 	}

@@ -3,6 +3,7 @@ package sheet
 import (
 	"fmt"
 	"math"
+	"slices"
 	"math/rand/v2"
 	"testing"
 )
@@ -91,7 +92,8 @@ func TestBoxTree(t *testing.T) {
 
 // TestNearestBeyond checks the point tree's nearest neighbour beyond a
 // distance against a test of every point, on scattered points, points
-// piled within 0.2 mm with a few apart, and points on a line.
+// piled within 0.2 mm with a few apart, and points on a line, in full
+// and cut to a range.
 func TestNearestBeyond(t *testing.T) {
 	rng := rand.New(rand.NewPCG(5, 8))
 	for _, tc := range []struct {
@@ -107,6 +109,7 @@ func TestNearestBeyond(t *testing.T) {
 			return Pt{50 + 0.15*rng.Float64(), 50 + 0.1*rng.Float64()}
 		}, 1500},
 		{"line", func(i int) Pt { return Pt{10 + 0.05*float64(i), 20} }, 800},
+		{"one spot", func(int) Pt { return Pt{30 + 0.1*rng.Float64(), 30} }, 50},
 	} {
 		t.Run(tc.name, func(t *testing.T) {
 			pts := make([]Pt, tc.n)
@@ -121,10 +124,58 @@ func TestNearestBeyond(t *testing.T) {
 						want = d
 					}
 				}
-				if got := tree.nearestBeyond(p, 0.2); got != want {
+				if got := tree.nearestBeyond(p, 0.2, 0, math.Inf(1)); got != want {
 					t.Fatalf("point %d %v: got %v, want %v", i, p, got, want)
+				}
+				// cut to [lo, hi]: exact between, at most lo below, hi above
+				const lo, hi = 0.3, 0.9
+				got := tree.nearestBeyond(p, 0.2, lo, hi)
+				switch {
+				case math.IsInf(want, 1):
+					if !math.IsInf(got, 1) {
+						t.Fatalf("point %d %v: cut: got %v, want +Inf", i, p, got)
+					}
+				case want <= lo && got > lo, want > lo && want < hi && got != want, want >= hi && got != hi:
+					t.Fatalf("point %d %v: cut to [%v, %v]: got %v for %v", i, p, lo, hi, got, want)
 				}
 			}
 		})
+	}
+}
+
+// TestMarkRadius checks the symbol radius against the median of every
+// station's nearest neighbour more than 0.2 mm away found by testing
+// every other station, for stations from 0.05 mm to 8 mm apart on a
+// jittered grid, with some piled on one spot.
+func TestMarkRadius(t *testing.T) {
+	rng := rand.New(rand.NewPCG(13, 21))
+	for _, step := range []float64{0.05, 0.3, 1, 1.5, 2.5, 3, 4, 8} {
+		for _, piled := range []int{0, 7} {
+			var pts []Pt
+			for i := range 400 {
+				p := Pt{step * (float64(i%20) + 0.3*rng.Float64()), step * (float64(i/20) + 0.3*rng.Float64())}
+				if piled > 0 && i%piled == 0 {
+					p = Pt{0.01 * rng.Float64(), 0}
+				}
+				pts = append(pts, p)
+			}
+			var nn []float64
+			for _, p := range pts {
+				best := math.Inf(1)
+				for _, q := range pts {
+					if d := dist(p, q); d > 0.2 && d < best {
+						best = d
+					}
+				}
+				if !math.IsInf(best, 1) {
+					nn = append(nn, best)
+				}
+			}
+			slices.Sort(nn)
+			want := clamp(0.4*nn[len(nn)/2], 0.5, 1.1)
+			if got := markRadius(pts); got != want {
+				t.Errorf("step %v mm, every %dth piled: got %v, want %v", step, piled, got, want)
+			}
+		}
 	}
 }

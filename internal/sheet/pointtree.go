@@ -59,28 +59,31 @@ func (t *pointTree) build(lo, hi int) int {
 }
 
 // nearestBeyond returns the least distance (mm) from p to a point of the
-// tree more than skip away from it, +Inf if none is.
-func (t *pointTree) nearestBeyond(p Pt, skip float64) float64 {
-	best := math.Inf(1)
-	if len(t.nodes) > 0 {
-		t.nearestAt(0, p, skip, &best)
+// tree more than skip away from it, when that lies between lo and hi:
+// below lo it returns some distance no greater than lo, from hi up it
+// returns hi, and +Inf when every point lies within skip of p.
+func (t *pointTree) nearestBeyond(p Pt, skip, lo, hi float64) float64 {
+	if len(t.nodes) == 0 {
+		return math.Inf(1)
+	}
+	best := hi
+	t.nearestAt(0, p, skip, lo, &best)
+	if best == hi && !t.beyondAt(0, p, skip) {
+		return math.Inf(1)
 	}
 	return best
 }
 
-func (t *pointTree) nearestAt(k int, p Pt, skip float64, best *float64) {
+// nearestAt lowers *best to the distance from p to the nearest point of
+// node k more than skip away, if nearer, and stops once *best <= lo.
+func (t *pointTree) nearestAt(k int, p Pt, skip, lo float64, best *float64) {
 	n := &t.nodes[k]
-	b := n.box
-	dx := math.Max(0, math.Max(b.x0-p.X, p.X-b.x1))
-	dy := math.Max(0, math.Max(b.y0-p.Y, p.Y-b.y1))
 	// the slack keeps rounding from leaving out a point the test would
 	// take
-	if math.Hypot(dx, dy)*(1-1e-9) >= *best {
+	if math.Sqrt(boxDist2(n.box, p))*(1-1e-9) >= *best {
 		return
 	}
-	fx := math.Max(math.Abs(p.X-b.x0), math.Abs(p.X-b.x1))
-	fy := math.Max(math.Abs(p.Y-b.y0), math.Abs(p.Y-b.y1))
-	if math.Hypot(fx, fy)*(1+1e-9) < skip {
+	if farDist(n.box, p)*(1+1e-9) < skip {
 		return // every point is within skip
 	}
 	if n.left == 0 {
@@ -96,8 +99,32 @@ func (t *pointTree) nearestAt(k int, p Pt, skip float64, best *float64) {
 	if boxDist2(t.nodes[r].box, p) < boxDist2(t.nodes[l].box, p) {
 		l, r = r, l
 	}
-	t.nearestAt(l, p, skip, best)
-	t.nearestAt(r, p, skip, best)
+	t.nearestAt(l, p, skip, lo, best)
+	if *best > lo {
+		t.nearestAt(r, p, skip, lo, best)
+	}
+}
+
+// beyondAt reports whether a point of node k lies more than skip from p.
+func (t *pointTree) beyondAt(k int, p Pt, skip float64) bool {
+	n := &t.nodes[k]
+	if farDist(n.box, p)*(1+1e-9) < skip {
+		return false
+	}
+	if n.left == 0 {
+		for _, i := range t.idx[n.lo:n.hi] {
+			if dist(p, t.pts[i]) > skip {
+				return true
+			}
+		}
+		return false
+	}
+	return t.beyondAt(n.left, p, skip) || t.beyondAt(n.right, p, skip)
+}
+
+// farDist returns the distance from p to the farthest corner of box b.
+func farDist(b bnd, p Pt) float64 {
+	return math.Hypot(math.Max(math.Abs(p.X-b.x0), math.Abs(p.X-b.x1)), math.Max(math.Abs(p.Y-b.y0), math.Abs(p.Y-b.y1)))
 }
 
 // boxDist2 returns the squared distance from p to box b.
