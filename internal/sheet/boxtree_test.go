@@ -3,8 +3,8 @@ package sheet
 import (
 	"fmt"
 	"math"
-	"slices"
 	"math/rand/v2"
+	"slices"
 	"testing"
 )
 
