@@ -312,7 +312,10 @@ func popCand(h []cand) []cand {
 // preferred direction. A spot on the hatch is taken only when no free spot
 // within reach is clear of it, and never without a leader list (a label
 // that may not move away from its mark stays off the hatch or is left
-// out). The choice is deterministic. It does not take the spot.
+// out). The far search is skipped where one for a label of the same box,
+// clear radius and no less reach found no room from an anchor within
+// missR (see missedNear). The choice is deterministic. It does not take
+// the spot.
 func (p *placer) find(w want, far []float64) (spot, bool) {
 	best, bestCost := spot{}, math.Inf(1)
 	nearHatch := false
