@@ -84,7 +84,7 @@
 // The cost per station stays the same however many crowd together: the
 // symbols and marks are found through a tree that answers for a whole pile
 // at once, the placed labels through a grid, and a label whose anchor lies
-// within 0.25 mm of one that found no spot on a leader does not search
+// within 0.1 mm of one that found no spot on a leader does not search
 // again (from the same anchor it would find none either).
 //
 // # Page coordinates

@@ -395,7 +395,7 @@ func (p *placer) find(w want, far []float64) (spot, bool) {
 // no room another label's anchor must lie for find to give up its far
 // search: in a crowd the labels that are left over would each try every
 // spot round the same pile in vain.
-const missR = 0.25
+const missR = 0.1
 
 // miss is a far search that found no room.
 type miss struct {
