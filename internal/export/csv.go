@@ -17,7 +17,8 @@ import (
 var csvColumns = []string{
 	"id", "channel", "array", "kind",
 	"x_", "y_", "z_", "base_x_", "base_y_", "height_",
-	"radius_", "nominal_radius_", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg",
+	"radius_", "nominal_radius_", "polar_deg", "nominal_polar_deg", "acoustic_distance_", "acoustic_polar_deg",
+	"polar_convention", "azimuth_deg",
 	"stand", "aim", "status", "governing_point",
 	"velocity_clearance_", "velocity_point", "hot_clearance_", "hot_point", "wall_clearance_",
 	"oaspl_db", "reasons",
@@ -56,6 +57,7 @@ const reasonSeparator = "; "
 //
 //	id, channel, array, kind, x_m, y_m, z_m, base_x_m, base_y_m, height_m,
 //	radius_m, nominal_radius_m, polar_deg, nominal_polar_deg,
+//	acoustic_distance_m, acoustic_polar_deg,
 //	polar_convention, azimuth_deg, stand, aim, status, governing_point,
 //	velocity_clearance_m, velocity_point, hot_clearance_m, hot_point,
 //	wall_clearance_m, oaspl_db, reasons
@@ -67,11 +69,20 @@ const reasonSeparator = "; "
 // the cell frame, whose z is measured up from the floor; height is the same
 // number, the microphone's height above the floor, for data systems that
 // ask for a height (an as-built file may give either); base_x and base_y
-// are the stand pole in plan. radius_m and polar_deg are as placed: the microphone's true distance and polar
-// angle from its array's centre on the axis (arcs) or from the nozzle exit;
-// nominal_radius_m and nominal_polar_deg are what the layout asks for (an
-// arc's radius and angle in its own plane, a ring's radius; empty where the
-// layout asks for none). Polar angles are in the layout's convention, which
+// are the stand pole in plan. nominal_radius_m and nominal_polar_deg are
+// what the layout asks for, radius_m and polar_deg the same quantities as
+// placed, so that a station placed where the layout asks has them equal: an
+// arc's radius and angle in its own plane (in plan for an arc set out in
+// plan), a ring's radius about the axis, a line's offset from the axis
+// (its angle for a line stepped by angle), a near-field line's clearance
+// from the predicted plume edge (radius_m and nominal_radius_m are empty for
+// points and probes, which have no nominal; polar_deg is then the angle
+// seen from the nozzle exit). acoustic_distance_m and acoustic_polar_deg are
+// the microphone's true distance and angle in space from its array's centre
+// on the axis (arcs, lines stepped by angle) or from the nozzle exit, which
+// the checks use (a ring microphone 0.9 m from the axis may be 1.7 m from
+// the exit); before these two columns were added, radius_m and polar_deg
+// held them. Polar angles are in the layout's convention, which
 // polar_convention names ("from_jet_axis" or "from_inlet"), and azimuth_deg
 // is the jet-frame azimuth. velocity_point and hot_point name the operating
 // point that governs each clearance; governing_point the one of the worst
@@ -108,8 +119,8 @@ func CSV(w io.Writer, p *planner.Plan) error {
 			s.ID, channel(s), s.Array, kindName(s.Kind),
 			length(s.Mic.X), length(s.Mic.Y), length(s.Mic.Z),
 			length(s.Base[0]), length(s.Base[1]), length(s.Height),
-			length(s.Radius), length(p.NominalRadius(s)), cellDegrees(s.Polar), cellDegrees(s.Nominal),
-			conv, cellDegrees(s.Jet.Azimuth),
+			length(p.PlacedRadius(s)), length(p.NominalRadius(s)), cellDegrees(p.PlacedPolar(s)), cellDegrees(s.Nominal),
+			length(s.Radius), cellDegrees(s.Polar), conv, cellDegrees(s.Jet.Azimuth),
 			standName(s), aimName(s.Incidence), status, s.Governing,
 			length(checkValue(s, planner.CheckVelocity)), checkPoint(s, planner.CheckVelocity),
 			length(checkValue(s, planner.CheckHot)), checkPoint(s, planner.CheckHot),

@@ -17,7 +17,7 @@ import (
 // independently of the package's own header.
 var csvColumns = []string{
 	"id", "channel", "array", "kind", "x_m", "y_m", "z_m", "base_x_m", "base_y_m", "height_m",
-	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "polar_convention", "azimuth_deg", "stand", "aim", "status",
+	"radius_m", "nominal_radius_m", "polar_deg", "nominal_polar_deg", "acoustic_distance_m", "acoustic_polar_deg", "polar_convention", "azimuth_deg", "stand", "aim", "status",
 	"governing_point", "velocity_clearance_m", "velocity_point", "hot_clearance_m", "hot_point", "wall_clearance_m", "oaspl_db", "reasons",
 }
 
@@ -91,7 +91,12 @@ func TestCSVValues(t *testing.T) {
 		{1, "base_x_m", "1.6500"},
 		{1, "base_y_m", "2.8579"},
 		{1, "radius_m", "3.0000"},
+		{1, "nominal_radius_m", "3.0000"},
+		{1, "acoustic_distance_m", "3.0000"},
 		{1, "polar_deg", "120.00"},
+		{1, "acoustic_polar_deg", "120.00"},
+		{3, "radius_m", ""}, // a point has no nominal radius to compare with
+		{3, "nominal_radius_m", ""},
 		{1, "polar_convention", "from_inlet"},
 		{1, "azimuth_deg", "0.00"},
 		{1, "stand", "boom tripod"},
@@ -124,7 +129,7 @@ func TestCSVEmptyCells(t *testing.T) {
 	s.Checks[1].Value = math.NaN()
 	s.Checks = s.Checks[:2] // no wall check
 	rows := readCSV(t, writeCSV(t, p))
-	for _, col := range []string{"y_m", "polar_deg", "azimuth_deg", "hot_clearance_m", "wall_clearance_m"} {
+	for _, col := range []string{"y_m", "acoustic_polar_deg", "azimuth_deg", "hot_clearance_m", "wall_clearance_m"} {
 		if got := rows[2][col]; got != "" {
 			t.Errorf("%s: got %q, want an empty cell", col, got)
 		}

@@ -30,7 +30,12 @@
 // (structs, not maps); an empty list is [], never null.
 //
 // A station gives its microphone (x_m, y_m, z_m), the foot of its stand
-// (base_x_m, base_y_m), height, radius and polar angle, its jet-frame
+// (base_x_m, base_y_m), height, its radius and polar angle nominal and as
+// placed, the same quantity each (radius_m equals nominal_radius_m for a
+// station placed where the layout asks: an arc's radius in its plane, a
+// ring's radius about the axis, a line's offset, a near-field line's
+// clearance; see CSV), the true distance and angle in space the checks use
+// (acoustic_distance_m, acoustic_polar_deg), its jet-frame
 // position ("jet": x_m, r_m, azimuth_deg), its kind (arc, line, near_field,
 // ring, points or probes), stand (null for a microphone flush on the floor),
 // aim ("normal" or "grazing") and aim point, status and governing point.

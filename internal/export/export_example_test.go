@@ -51,8 +51,8 @@ func ExampleCSV() {
 		fmt.Println(err)
 	}
 	// Output:
-	// id,channel,array,kind,x_m,y_m,z_m,base_x_m,base_y_m,height_m,radius_m,nominal_radius_m,polar_deg,nominal_polar_deg,polar_convention,azimuth_deg,stand,aim,status,governing_point,velocity_clearance_m,velocity_point,hot_clearance_m,hot_point,wall_clearance_m,oaspl_db,reasons
-	// m1,7,side,points,0.0000,2.0000,1.2000,0.0000,2.0000,1.2000,2.0000,,90.00,,from_inlet,0.00,tripod,normal,ok,,,,,,1.2500,,
+	// id,channel,array,kind,x_m,y_m,z_m,base_x_m,base_y_m,height_m,radius_m,nominal_radius_m,polar_deg,nominal_polar_deg,acoustic_distance_m,acoustic_polar_deg,polar_convention,azimuth_deg,stand,aim,status,governing_point,velocity_clearance_m,velocity_point,hot_clearance_m,hot_point,wall_clearance_m,oaspl_db,reasons
+	// m1,7,side,points,0.0000,2.0000,1.2000,0.0000,2.0000,1.2000,,,90.00,,2.0000,90.00,from_inlet,0.00,tripod,normal,ok,,,,,,1.2500,,
 }
 
 // The whole plan as JSON, read back by a data system. A check that does not
@@ -113,7 +113,7 @@ func ExampleWriteFile() {
 	// Output:
 	// first run written: true
 	// second run failed: true
-	// the file holds the 394 bytes of the first run
+	// the file holds the 440 bytes of the first run
 }
 
 // The plan drawn in the cell frame, for a drawing or GIS program that

@@ -57,6 +57,8 @@ type contractStation struct {
 	Z              json.RawMessage `json:"z_m"`
 	Radius         json.RawMessage `json:"radius_m"`
 	Polar          json.RawMessage `json:"polar_deg"`
+	Distance       json.RawMessage `json:"acoustic_distance_m"`
+	SourcePolar    json.RawMessage `json:"acoustic_polar_deg"`
 	Status         json.RawMessage `json:"status"`
 	GoverningPoint json.RawMessage `json:"governing_point"`
 	Checks         struct {
@@ -146,7 +148,8 @@ func TestJSONContract(t *testing.T) {
 		}{
 			{"id", s.ID, "string"}, {"array", s.Array, "string"}, {"channel", s.Channel, "number"},
 			{"x_m", s.X, "number"}, {"y_m", s.Y, "number"}, {"z_m", s.Z, "number"},
-			{"radius_m", s.Radius, "number"}, {"polar_deg", s.Polar, "number"},
+			{"radius_m", s.Radius, "number|null"}, {"polar_deg", s.Polar, "number"},
+			{"acoustic_distance_m", s.Distance, "number"}, {"acoustic_polar_deg", s.SourcePolar, "number"},
 			{"status", s.Status, "string"}, {"governing_point", s.GoverningPoint, "string"},
 			{"checks.velocity_clearance_m", s.Checks.Velocity, "number"},
 			{"checks.hot_clearance_m", s.Checks.Hot, "number"},

@@ -18,23 +18,28 @@ type stationDoc struct {
 	BaseX   num    `json:"base_x_m"`
 	BaseY   num    `json:"base_y_m"`
 	Height  num    `json:"height_m"`
-	// Radius and Polar are as placed (the microphone's true distance and
-	// angle from the array's centre); the nominal ones are what the
-	// layout asks for, null where it asks for none.
-	Radius        num        `json:"radius_m"`
-	NominalRadius num        `json:"nominal_radius_m"`
-	Polar         num        `json:"polar_deg"`
-	NominalPolar  num        `json:"nominal_polar_deg"`
-	Jet           jetDoc     `json:"jet"`
-	Stand         *string    `json:"stand"`
-	Aim           string     `json:"aim"`
-	AimAt         vecDoc     `json:"aim_at"`
-	Status        string     `json:"status"`
-	Governing     string     `json:"governing_point"`
-	Levels        []levelDoc `json:"levels"`
-	Checks        checksDoc  `json:"checks"`
-	CheckDetails  []checkDoc `json:"check_details"`
-	Reasons       []string   `json:"reasons"`
+	// The nominal radius and polar angle are what the layout asks for,
+	// null where it asks for none; Radius and Polar are the same
+	// quantities as placed (equal to the nominal ones for a station placed
+	// where the layout asks; see CSV). AcousticDistance and AcousticPolar
+	// are the microphone's true distance and angle in space from its
+	// array's centre on the axis or the nozzle exit, which the checks use.
+	Radius           num        `json:"radius_m"`
+	NominalRadius    num        `json:"nominal_radius_m"`
+	Polar            num        `json:"polar_deg"`
+	NominalPolar     num        `json:"nominal_polar_deg"`
+	AcousticDistance num        `json:"acoustic_distance_m"`
+	AcousticPolar    num        `json:"acoustic_polar_deg"`
+	Jet              jetDoc     `json:"jet"`
+	Stand            *string    `json:"stand"`
+	Aim              string     `json:"aim"`
+	AimAt            vecDoc     `json:"aim_at"`
+	Status           string     `json:"status"`
+	Governing        string     `json:"governing_point"`
+	Levels           []levelDoc `json:"levels"`
+	Checks           checksDoc  `json:"checks"`
+	CheckDetails     []checkDoc `json:"check_details"`
+	Reasons          []string   `json:"reasons"`
 }
 
 // jetDoc is a position in the jet frame.
@@ -79,30 +84,32 @@ type checkDoc struct {
 func newStationDoc(p *planner.Plan, s *planner.Station) stationDoc {
 	status, _ := verdictName(s.Status)
 	d := stationDoc{
-		ID:            s.ID,
-		Array:         s.Array,
-		Kind:          kindName(s.Kind),
-		Index:         s.Index,
-		Channel:       s.Channel,
-		X:             metres(s.Mic.X),
-		Y:             metres(s.Mic.Y),
-		Z:             metres(s.Mic.Z),
-		BaseX:         metres(s.Base[0]),
-		BaseY:         metres(s.Base[1]),
-		Height:        metres(s.Height),
-		Radius:        metres(s.Radius),
-		NominalRadius: metres(p.NominalRadius(s)),
-		Polar:         degrees(s.Polar),
-		NominalPolar:  degrees(s.Nominal),
-		Jet:           jetDoc{X: metres(s.Jet.X), R: metres(s.Jet.R), Azimuth: degrees(s.Jet.Azimuth)},
-		Aim:           aimName(s.Incidence),
-		AimAt:         newVecDoc(s.AimAt),
-		Status:        status,
-		Governing:     s.Governing,
-		Checks:        newChecksDoc(s),
-		CheckDetails:  make([]checkDoc, len(s.Checks)),
-		Reasons:       list(s.Reasons),
-		Levels:        make([]levelDoc, len(s.Levels)),
+		ID:               s.ID,
+		Array:            s.Array,
+		Kind:             kindName(s.Kind),
+		Index:            s.Index,
+		Channel:          s.Channel,
+		X:                metres(s.Mic.X),
+		Y:                metres(s.Mic.Y),
+		Z:                metres(s.Mic.Z),
+		BaseX:            metres(s.Base[0]),
+		BaseY:            metres(s.Base[1]),
+		Height:           metres(s.Height),
+		Radius:           metres(p.PlacedRadius(s)),
+		NominalRadius:    metres(p.NominalRadius(s)),
+		Polar:            degrees(p.PlacedPolar(s)),
+		NominalPolar:     degrees(s.Nominal),
+		AcousticDistance: metres(s.Radius),
+		AcousticPolar:    degrees(s.Polar),
+		Jet:              jetDoc{X: metres(s.Jet.X), R: metres(s.Jet.R), Azimuth: degrees(s.Jet.Azimuth)},
+		Aim:              aimName(s.Incidence),
+		AimAt:            newVecDoc(s.AimAt),
+		Status:           status,
+		Governing:        s.Governing,
+		Checks:           newChecksDoc(s),
+		CheckDetails:     make([]checkDoc, len(s.Checks)),
+		Reasons:          list(s.Reasons),
+		Levels:           make([]levelDoc, len(s.Levels)),
 	}
 	if s.Stand != nil {
 		name := s.Stand.Name

@@ -172,7 +172,7 @@ func TestJSONNonFinite(t *testing.T) {
 		t.Fatalf("output is not valid JSON: %v", err)
 	}
 	for _, path := range [][]any{
-		{"stations", 1, "x_m"}, {"stations", 1, "radius_m"}, {"stations", 1, "polar_deg"},
+		{"stations", 1, "x_m"}, {"stations", 1, "acoustic_distance_m"}, {"stations", 1, "acoustic_polar_deg"},
 		{"stations", 1, "base_y_m"}, {"stations", 1, "jet", "azimuth_deg"},
 		{"stations", 1, "checks", "velocity_clearance_m"}, {"stations", 1, "check_details", 0, "value"},
 		{"arrays", 0, "far_field_radius_interval_m", 0}, {"arrays", 0, "far_field_radius_interval_m", 1},

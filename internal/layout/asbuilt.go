@@ -29,7 +29,7 @@ var (
 	// 'arcwright plan --csv' writes (without their unit suffix): an edited
 	// copy of it is read as an as-built file, its x_m … base_y_m (or x_ft …)
 	// columns in their unit, the rest ignored.
-	exportOnly = []string{"channel", "array", "kind", "radius", "nominal_radius", "polar_deg", "nominal_polar_deg",
+	exportOnly = []string{"channel", "array", "kind", "radius", "nominal_radius", "polar_deg", "nominal_polar_deg", "acoustic_distance", "acoustic_polar_deg",
 		"polar_convention", "azimuth_deg", "stand", "aim", "status", "governing_point", "velocity_clearance", "velocity_point",
 		"hot_clearance", "hot_point", "wall_clearance", "oaspl_db", "reasons"}
 )

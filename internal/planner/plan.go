@@ -229,6 +229,8 @@ type ArrayResult struct {
 	// Notes are other remarks (stations clipped by the floor or room).
 	Notes    []string
 	Stations int
+
+	edge nearLine // a near-field line's plume edge (PlacedRadius)
 }
 
 // AbsorptionRow is one 1/3-octave band of the absorption table.

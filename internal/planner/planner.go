@@ -169,7 +169,7 @@ func (ck *checker) placeArrays() ([]placedArray, error) {
 			res.Radius = a.Offset
 		case NearField:
 			edge = edgeLine(ck.points, a.XFrom, a.XTo)
-			res.Radius = a.Clearance
+			res.Radius, res.edge = a.Clearance, edge
 			if a.Clearance < ck.lim.Margin {
 				res.Notes = append(res.Notes, fmt.Sprintf("the clearance %s is less than the %s margin: its stations will be blocked", ck.m(a.Clearance), ck.m(ck.lim.Margin)))
 			}
@@ -357,7 +357,7 @@ func (ck *checker) summarisePlan(plan *Plan, placed []placedArray) {
 	plan.Crew = ck.crewExposures()
 	plan.Impingements = impingements(ck.req, ck.obstacles, ck.points)
 	ck.imps = plan.Impingements
-	plan.Warnings = append(append(append(append([]string(nil), ck.req.Notes...), ck.warnings(ck.atm)...), ck.noiseWarnings(plan)...), ck.coaxialNoiseWarnings()...)
+	plan.Warnings = append(append(ck.warnings(ck.atm), ck.noiseWarnings(plan)...), ck.coaxialNoiseWarnings()...)
 }
 
 func indexOf(points []PointResult, name string) int {

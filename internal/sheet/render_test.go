@@ -141,7 +141,7 @@ func TestReadBackWithPoppler(t *testing.T) {
 	}{
 		{"chamber A3", chamberPlan, sheet.Options{}, []string{
 			"Scale 1:50 on A3", "Model jet arc survey", "Chamber A", "MJ-2025-07", "2025-03-10", "J. Ortega",
-			"sheet", "1 of 4", "4 of 4", "plan 1:50", "metric: m", "polar angle measured from the downstream jet axis",
+			"sheet", "1 of 3", "3 of 3", "plan 1:50", "metric: m", "polar angle measured from the downstream jet axis",
 			"5.0 m/s", "50.0 °C", "0.250 m", "conservative end of", "A-01 -> A-10: 0.813 m",
 		}},
 		{"chamber A4", chamberPlan, sheet.Options{Paper: "A4"}, []string{"Scale 1:100 on A4", "A4 landscape", "5 m"}},

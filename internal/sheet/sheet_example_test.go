@@ -28,7 +28,7 @@ func ExampleBuild() {
 	fmt.Printf("scale bar %s, %.0f mm long\n", m.ScaleBar.Label, m.ScaleBar.LengthMM)
 	fmt.Printf("zones of %s, issued %s\n", m.Governing, m.IssueDate)
 	// Output:
-	// A3, plan 1:50, elevation 1:100, 4 sheets
+	// A3, plan 1:50, elevation 1:100, 3 sheets
 	// scale bar 2.5 m, 50 mm long
 	// zones of SP3, issued 2025-03-10
 }

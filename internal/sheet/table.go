@@ -223,7 +223,16 @@ func (f *flow) placeTable(lt *laidTable) {
 		for i := 0; i < min(keep, len(rows)); i++ {
 			need += rows[i].H
 		}
-		f.ensure(need)
+		// the title spans the sheet and keeps above the title block; the
+		// rows of a table narrower than the space beside the title block
+		// go down beside it
+		titleH := contH
+		if first {
+			titleH = fullH
+		}
+		for f.page == nil || (!f.atTop() && (f.room() < titleH || f.bottomFor(laneX(0), laneX(0)+tw)-f.y < need)) {
+			f.newPage()
+		}
 		top := f.y
 		nolimit := f.b.frame.Bottom() - top
 		counts := fill(rows, top, nolimit, first, 1)

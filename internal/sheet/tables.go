@@ -18,7 +18,7 @@ func (b *builder) stationTable() tableSpec {
 	t := tableSpec{
 		name: "stations",
 		title: "STATION TABLE — X and Y from the datum, heights above the floor, lengths in " + pr.lenUnit() +
-			"; nominal: the radius and polar angle the layout asks for (arcs: in the arc's plane, as marked on the plan); as placed: the microphone's true distance and angle from its array's centre on the axis (or the nozzle exit), which the checks use" +
+			"; radius and polar angle nominal (as the layout asks) and as placed, the same quantity: arcs in the arc's plane, as marked; rings about the axis; lines, offset from the axis; near-field, clearance from the plume edge (CSV, JSON: acoustic_distance)" +
 			"; clearances are the smallest over all operating points, each with the point that governs it; " + pr.convention(),
 		heads: []string{"ID", "Ch", "Array", "Polar nominal (deg)", "Polar as placed (deg)", "Radius nominal " + u, "Radius as placed " + u,
 			"Height " + u, "X " + u, "Y " + u,
@@ -56,12 +56,12 @@ func (b *builder) stationTable() tableSpec {
 		if finite(s.Nominal) {
 			nomPolar = deg(s.Nominal)
 		}
-		nomR := "-"
+		nomR, placedR := "-", "-"
 		if r := b.plan.NominalRadius(s); finite(r) {
-			nomR = pr.cell(r)
+			nomR, placedR = pr.cell(r), pr.cell(b.plan.PlacedRadius(s))
 		}
 		t.rows = append(t.rows, []string{
-			s.ID, ch, s.Array, nomPolar, deg(s.Polar), nomR, pr.cell(s.Radius), pr.cell(s.Height), pr.cell(s.Mic.X), pr.cell(s.Mic.Y),
+			s.ID, ch, s.Array, nomPolar, deg(b.plan.PlacedPolar(s)), nomR, placedR, pr.cell(s.Height), pr.cell(s.Mic.X), pr.cell(s.Mic.Y),
 			chk(planner.CheckVelocity, true), chk(planner.CheckHot, true), chk(planner.CheckWall, false), status,
 			strings.Join(s.Reasons, "; "),
 		})
