@@ -192,18 +192,11 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w, stderr io.Writer) error {
 	return noiseText(w, src, p, best.l, best.levels, best.r, best.th, best.xs, near, o, atm, sys)
 }
 
-// noiseMinSourceDj is the distance from the source position, in fully
-// expanded diameters, inside which the noise command refuses a receiver:
-// the source region of the mixing noise itself spans several Dj along the
-// axis about the end of the potential core (common practice), so a
-// spherical-spreading prediction from a point there has no meaning.
-const noiseMinSourceDj = 2
-
 // receiverOutsideJet returns a command-line error naming --distance and
 // --polar when the receiver is within one nozzle diameter of the exit
 // centre (the nozzle itself), on or inside the conservative velocity or hot
 // zone of plume p (the outline the planner keeps stations out of, without
-// the layout's margin), or within noiseMinSourceDj of a source position in
+// the layout's margin), or within acoustics.MinSourceDistance Dj of a source position in
 // xss (m downstream of the exit).
 func receiverOutsideJet(o *NoiseOptions, p *jet.Plume, xss []float64, sys units.System) error {
 	L := func(m float64) string { return units.FormatLength(m, sys) }
@@ -224,8 +217,8 @@ func receiverOutsideJet(o *NoiseOptions, p *jet.Plume, xss []float64, sys units.
 	}
 	dj := p.Exit().FullyExpandedDiameter
 	for _, xs := range xss {
-		if math.Hypot(x-xs, r) < noiseMinSourceDj*dj {
-			return usageError{fmt.Errorf("%s within %d Dj (%s) of the noise source at the end of the potential core, %s downstream: the prediction is a far-field one; give a receiver farther out", at, noiseMinSourceDj, L(noiseMinSourceDj*dj), L(xs))}
+		if math.Hypot(x-xs, r) < acoustics.MinSourceDistance*dj {
+			return usageError{fmt.Errorf("%s within %g Dj (%s) of the noise source at the end of the potential core, %s downstream: the prediction is a far-field one; give a receiver farther out", at, acoustics.MinSourceDistance, L(acoustics.MinSourceDistance*dj), L(xs))}
 		}
 	}
 	return nil

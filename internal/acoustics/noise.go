@@ -36,6 +36,14 @@ const (
 	ratioRoundOff = 1e-9
 )
 
+// MinSourceDistance is the distance from the noise source position, in
+// fully expanded jet diameters, inside which no level is predicted: the
+// mixing noise's source region itself spans several Dj along the axis
+// about the end of the potential core (common practice), so spherical
+// spreading from a point there has no meaning. The noise command refuses
+// such a receiver; the planner gives such a station no level and says why.
+const MinSourceDistance = 2.0
+
 // Crest factors (peak over rms) for the C-weighted peak estimate, dB: 12 dB
 // for subsonic shock-free jets, the top of the +11–12 dB quoted in
 // noise-and-exposure.md §4 (FROM MEMORY); 15 dB for supersonic or

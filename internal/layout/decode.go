@@ -57,6 +57,11 @@ func Decode(name string, data []byte) (*planner.Request, []Warning, error) {
 		return nil, nil, d.errs
 	}
 	sortWarnings(d.warns)
+	if req != nil {
+		for _, w := range d.warns {
+			req.Notes = append(req.Notes, w.String())
+		}
+	}
 	return req, d.warns, nil
 }
 

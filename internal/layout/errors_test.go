@@ -10,6 +10,7 @@ import (
 
 	"arcwright/internal/geometry"
 	"arcwright/internal/jet"
+	"arcwright/internal/planner"
 	"arcwright/internal/units"
 )
 
@@ -191,13 +192,34 @@ func TestWarnings(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			_, got := mustDecode(t, tt.text)
+			req, got := mustDecode(t, tt.text)
 			if len(got) != len(tt.want) {
 				t.Fatalf("got %d warnings %v, want %d %v", len(got), got, len(tt.want), tt.want)
 			}
 			for i := range got {
 				if got[i] != tt.want[i] {
 					t.Errorf("warning %d: got %q, want %q", i, got[i], tt.want[i])
+				}
+			}
+			// the request carries them, so that plan and check show what
+			// validate shows
+			if len(req.Notes) != len(tt.want) {
+				t.Fatalf("got %d notes in the request %q, want %d", len(req.Notes), req.Notes, len(tt.want))
+			}
+			for i, w := range tt.want {
+				if req.Notes[i] != w.String() {
+					t.Errorf("note %d: got %q, want %q", i, req.Notes[i], w.String())
+				}
+			}
+			if len(req.Arrays) > 0 {
+				p, err := planner.New(req)
+				if err != nil {
+					t.Fatal(err)
+				}
+				for i, w := range tt.want {
+					if i >= len(p.Warnings) || p.Warnings[i] != w.String() {
+						t.Errorf("the plan's warnings do not start with %q: %q", w.String(), p.Warnings)
+					}
 				}
 			}
 		})

@@ -181,11 +181,6 @@ func ReverberationRange(volume, surface float64) string {
 	return fmt.Sprintf("want %.2g s to %.3g s for this room (%.0f m³, %.0f m² of walls, floor and ceiling)", t(MaxRoomAbsorption), t(MinRoomAbsorption), volume, surface)
 }
 
-// minSourceDistance is the distance from the source position, in fully
-// expanded jet diameters, inside which no level is predicted: the source
-// model is a far-field one, and at the source it tends to infinity (ours).
-const minSourceDistance = 1.0
-
 // levelAt predicts the levels of point k at pos (cell frame, m): spherical
 // spreading from the source at the end of the nominal potential core (the
 // source position of the source-offset and floor checks), air absorption,
@@ -216,8 +211,8 @@ func (ck *checker) levelFrom(k int, xs float64, pos r3.Vec) (acoustics.Levels, e
 	q := f.ToJet(pos)
 	rel := geometry.JetPoint{X: q.X - xs, R: q.R}
 	path := acoustics.Path{Distance: rel.Distance(), Polar: rel.Polar(), RoomConstant: ck.noise.roomR}
-	if dj := p.Exit.FullyExpandedDiameter; !(path.Distance >= minSourceDistance*dj) {
-		return acoustics.Levels{}, fmt.Errorf("%s from the source position of %s, within one jet diameter (%s): a far-field prediction does not apply there", ck.m(path.Distance), p.Name, ck.m(dj))
+	if dj := p.Exit.FullyExpandedDiameter; !(path.Distance >= acoustics.MinSourceDistance*dj) {
+		return acoustics.Levels{}, fmt.Errorf("%s from the source position of %s, within %g jet diameters (%s): a far-field prediction does not apply there", ck.m(path.Distance), p.Name, acoustics.MinSourceDistance, ck.m(acoustics.MinSourceDistance*dj))
 	}
 	if fl := ck.noise.floor; (fl == geometry.Hard || fl == geometry.Grass) && pos.Z >= 0 {
 		path.SoftFloor = fl == geometry.Grass

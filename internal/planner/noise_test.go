@@ -132,7 +132,7 @@ func TestRoomLevels(t *testing.T) {
 }
 
 // TestLevelErrorReason checks that a level that cannot be predicted (a
-// microphone at the source position, where a far-field prediction gives
+// microphone at the source position (acoustics.MinSourceDistance), where a far-field prediction gives
 // hundreds of dB) blocks the station with the real reason, keeps one level
 // entry per operating point, and never reads as predicted.
 func TestLevelErrorReason(t *testing.T) {
@@ -140,11 +140,22 @@ func TestLevelErrorReason(t *testing.T) {
 	req.Arrays[0].Fixed[0].At = req.Exit.ToCell(geometry.JetPoint{X: lc})
 	p := mustPlan(t, req)
 	c := check(t, p, CheckLevel)
-	if c.Verdict != Blocked || !strings.Contains(c.Reason, "within one jet diameter") {
-		t.Errorf("got %v %q, want blocked: within one jet diameter of the source position", c.Verdict, c.Reason)
+	if c.Verdict != Blocked || !strings.Contains(c.Reason, "within 2 jet diameters") {
+		t.Errorf("got %v %q, want blocked: within 2 jet diameters of the source position", c.Verdict, c.Reason)
 	}
 	if st := p.Stations[0]; len(st.Levels) != len(p.Points) || !math.IsNaN(st.Levels[0].OASPL) {
 		t.Errorf("got levels %+v, want one entry per point (%d), not predicted (NaN)", st.Levels, len(p.Points))
+	}
+	// the rule is the noise command's: 1.5 Dj off the source is refused,
+	// 2.5 Dj is predicted
+	dj := p.Points[0].Exit.FullyExpandedDiameter
+	for _, k := range []float64{1.5, 2.5} {
+		req.Arrays[0].Fixed[0].At = req.Exit.ToCell(geometry.JetPoint{X: lc, R: k * dj})
+		p := mustPlan(t, req)
+		c := check(t, p, CheckLevel)
+		if refused := strings.Contains(c.Reason, "within 2 jet diameters"); refused != (k < acoustics.MinSourceDistance) {
+			t.Errorf("%g Dj from the source: got %v %q, want refused %v", k, c.Verdict, c.Reason, k < acoustics.MinSourceDistance)
+		}
 	}
 }
 

@@ -293,6 +293,11 @@ type Request struct {
 	// the check command's as-built positions. Every key must name a
 	// station of the plan.
 	AsBuilt map[string]Placement
+	// Notes are the warnings found while reading the layout, each with its
+	// file, line and key; the plan's warnings repeat them first, so that
+	// plan, check, the exports, the sheet and the preview show what
+	// validate shows.
+	Notes []string
 }
 
 // Placement is a measured station position.

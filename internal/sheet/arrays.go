@@ -260,26 +260,16 @@ func markRadius(pts []Pt) float64 {
 	if len(pts) < 2 {
 		return 1.1
 	}
-	idx := make([]int, len(pts))
-	for i := range idx {
-		idx[i] = i
-	}
-	sort.Slice(idx, func(a, b int) bool { return pts[idx[a]].X < pts[idx[b]].X })
+	// the median matters only between 0.5/0.4 and 1.1/0.4 mm: each
+	// distance is looked for no nearer than 1.2 mm and no farther than
+	// 2.8 mm, which keeps a dense crowd from searching all round each
+	// station (the median of the distances so found is the true one, or
+	// lies on the same side of that range)
+	t := newPointTree(pts)
 	var nn []float64
-	for a, i := range idx {
-		best := math.Inf(1)
-		for b := a - 1; b >= 0 && pts[i].X-pts[idx[b]].X < best; b-- {
-			if d := dist(pts[i], pts[idx[b]]); d > 0.2 && d < best {
-				best = d
-			}
-		}
-		for b := a + 1; b < len(idx) && pts[idx[b]].X-pts[i].X < best; b++ {
-			if d := dist(pts[i], pts[idx[b]]); d > 0.2 && d < best {
-				best = d
-			}
-		}
-		if !math.IsInf(best, 1) {
-			nn = append(nn, best)
+	for _, p := range pts {
+		if d := t.nearestBeyond(p, 0.2, 1.2, 2.8); !math.IsInf(d, 1) {
+			nn = append(nn, d)
 		}
 	}
 	if len(nn) == 0 {

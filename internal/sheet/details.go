@@ -119,7 +119,7 @@ func (v *planView) findDetails() []detail {
 			end := start + 1
 			run := boundOfStations(ss[start:end])
 			for end < len(ss) {
-				next := boundOfStations(ss[start : end+1])
+				next := run.Extend(orb.Point{ss[end].Mic.X, ss[end].Mic.Y}).Extend(ss[end].Base)
 				if !detailFits(next, chosen) {
 					break
 				}

@@ -81,6 +81,12 @@
 // and a label away from its mark gets a leader. A label that may not move
 // (an arc's angle) is left out rather than laid on the hatch.
 //
+// The cost per station stays the same however many crowd together: the
+// symbols and marks are found through a tree that answers for a whole pile
+// at once, the placed labels through a grid, and a label whose anchor lies
+// within 0.1 mm of one that found no spot on a leader does not search
+// again (from the same anchor it would find none either).
+//
 // # Page coordinates
 //
 // Page coordinates are millimetres from the top-left corner of the sheet,

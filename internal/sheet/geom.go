@@ -80,8 +80,12 @@ func boundOf(pts []Pt) Rect {
 
 // segHitsRect reports whether the segment ab meets the rectangle r shrunk
 // by gap (mm) on every side (Liang–Barsky clipping).
-func segHitsRect(a, b Pt, r Rect, gap float64) bool {
-	x0, y0, x1, y1 := r.X+gap, r.Y+gap, r.Right()-gap, r.Bottom()-gap
+func segHitsRect(a, b Pt, r Rect, gap float64) bool { return segHitsEdges(a, b, bndOf(r), gap) }
+
+// segHitsEdges is segHitsRect for the box with edges e. Growing the box
+// never turns a hit into a miss, rounding included.
+func segHitsEdges(a, b Pt, e bnd, gap float64) bool {
+	x0, y0, x1, y1 := e.x0+gap, e.y0+gap, e.x1-gap, e.y1-gap
 	if x0 >= x1 || y0 >= y1 {
 		return false
 	}

@@ -9,20 +9,36 @@ import (
 const labelGap = 0.3
 
 // placer keeps the boxes already taken in a view (labels, marks, symbols)
-// and the leader lines, in a uniform grid of cells, and finds a free spot
-// for each new label.
+// and the leader lines, and finds a free spot for each new label. The
+// labels and leaders lie in a uniform grid of cells: they never pile up,
+// since a label goes only where it is clear of the others. The fixed
+// boxes (station symbols, marks, the drawn things labels keep off) can
+// pile up by the thousand on one spot of a crowded plan, and lie in a
+// boxTree instead. The fixed boxes are added before the labels near them
+// are placed: the tree is rebuilt when more than pendingMax boxes came
+// after it.
 type placer struct {
 	bounds Rect    // labels must lie inside
 	cell   float64 // grid cell size, mm
 	grid   map[[2]int][]int
-	items  []pitem
+	items  []pitem // the labels and leaders
 	seen   []uint32
 	gen    uint32
+	fixed  []pitem // the fixed boxes, in the order added
+	tree   *boxTree
+	built  int // fixed[:built] are in tree
 	// hatch is the raster of the view's hatched regions, nil when none:
 	// a label keeps off it where it can (see find)
 	hatch *hatchMask
 	cands []cand // the far candidates of the label being placed
+	// misses holds the labels whose far search found no room, by the
+	// cell of side missR their anchor lies in (see find)
+	misses map[[2]int][]miss
 }
+
+// pendingMax is the most fixed boxes the placer tests one by one before
+// it rebuilds its tree.
+const pendingMax = 16
 
 // pitem is a taken box or a leader segment.
 type pitem struct {
@@ -34,7 +50,7 @@ type pitem struct {
 }
 
 func newPlacer(bounds Rect) *placer {
-	return &placer{bounds: bounds, cell: 4, grid: make(map[[2]int][]int)}
+	return &placer{bounds: bounds, cell: 4, grid: make(map[[2]int][]int), tree: &boxTree{}}
 }
 
 // hatchFrom rasters the hatched regions among shapes (the zones, keep-outs
@@ -54,6 +70,10 @@ func (p *placer) cellRange(r Rect) (int, int, int, int) {
 }
 
 func (p *placer) insert(it pitem, r Rect) {
+	if !it.seg && !it.label {
+		p.fixed = append(p.fixed, it)
+		return
+	}
 	i := len(p.items)
 	p.items = append(p.items, it)
 	p.seen = append(p.seen, 0)
@@ -64,6 +84,16 @@ func (p *placer) insert(it pitem, r Rect) {
 			p.grid[k] = append(p.grid[k], i)
 		}
 	}
+}
+
+// pending returns the fixed boxes not in the tree, after rebuilding the
+// tree if they are many.
+func (p *placer) pending() []pitem {
+	if len(p.fixed)-p.built > pendingMax {
+		p.tree = newBoxTree(append([]pitem(nil), p.fixed...))
+		p.built = len(p.fixed)
+	}
+	return p.fixed[p.built:]
 }
 
 // block marks r as taken by a mark or symbol.
@@ -80,7 +110,7 @@ func (p *placer) leader(a, b Pt) {
 	p.insert(pitem{a: a, b: b, seg: true}, boundOf([]Pt{a, b}))
 }
 
-// visit calls f for every item near r once.
+// visit calls f for every label and leader near r once.
 func (p *placer) visit(r Rect, f func(it *pitem) bool) bool {
 	p.gen++
 	x0, y0, x1, y1 := p.cellRange(r)
@@ -107,6 +137,14 @@ func (p *placer) free(r Rect) bool {
 		return false
 	}
 	grown := Rect{r.X - labelGap, r.Y - labelGap, r.W + 2*labelGap, r.H + 2*labelGap}
+	for _, it := range p.pending() {
+		if it.r.Overlaps(grown, 0) {
+			return false
+		}
+	}
+	if p.tree.overlaps(grown) {
+		return false
+	}
 	return p.visit(grown, func(it *pitem) bool {
 		if it.seg {
 			return !segHitsRect(it.a, it.b, grown, 0)
@@ -115,14 +153,44 @@ func (p *placer) free(r Rect) bool {
 	})
 }
 
+// boxesOver returns the number of taken boxes (not leaders) that overlap
+// r.
+func (p *placer) boxesOver(r Rect) int {
+	n := p.tree.count(r)
+	for _, it := range p.pending() {
+		if it.r.Overlaps(r, 0) {
+			n++
+		}
+	}
+	p.visit(r, func(it *pitem) bool {
+		if !it.seg && it.r.Overlaps(r, 0) {
+			n++
+		}
+		return true
+	})
+	return n
+}
+
+// leaderGap is how far (mm) a leader keeps inside the edges of the boxes
+// it must not cross.
+const leaderGap = 0.05
+
 // clearPath reports whether a leader from a to b crosses no taken box but
 // those that hold a (the mark the leader leaves).
 func (p *placer) clearPath(a, b Pt) bool {
+	for _, it := range p.pending() {
+		if !bndOf(it.r).holdsOpen(a) && segHitsRect(a, b, it.r, leaderGap) {
+			return false
+		}
+	}
+	if p.tree.segHits(a, b, leaderGap) {
+		return false
+	}
 	return p.visit(boundOf([]Pt{a, b}), func(it *pitem) bool {
-		if it.seg || it.r.X < a.X && a.X < it.r.Right() && it.r.Y < a.Y && a.Y < it.r.Bottom() {
+		if it.seg || bndOf(it.r).holdsOpen(a) {
 			return true
 		}
-		return !segHitsRect(a, b, it.r, 0.05)
+		return !segHitsRect(a, b, it.r, leaderGap)
 	})
 }
 
@@ -130,16 +198,15 @@ func (p *placer) clearPath(a, b Pt) bool {
 // at anchor lies nearer than gap (mm) to box r: a label there would seem
 // to name that station.
 func (p *placer) nearerMark(r Rect, anchor Pt, gap float64) bool {
-	found := false
-	p.visit(Rect{r.X - gap, r.Y - gap, r.W + 2*gap, r.H + 2*gap}, func(it *pitem) bool {
-		if !it.mark || it.r.X <= anchor.X && anchor.X <= it.r.Right() && it.r.Y <= anchor.Y && anchor.Y <= it.r.Bottom() {
+	for _, it := range p.pending() {
+		if !it.mark || bndOf(it.r).holds(anchor) {
+			continue
+		}
+		if c := centre(it.r); dist(rectEdgePoint(r, c), c) < gap {
 			return true
 		}
-		c := Pt{it.r.X + it.r.W/2, it.r.Y + it.r.H/2}
-		found = dist(rectEdgePoint(r, c), c) < gap
-		return !found
-	})
-	return found
+	}
+	return p.tree.markNear(r, anchor, gap)
 }
 
 // want describes a label to place: its size, the point it labels, the
@@ -245,7 +312,10 @@ func popCand(h []cand) []cand {
 // preferred direction. A spot on the hatch is taken only when no free spot
 // within reach is clear of it, and never without a leader list (a label
 // that may not move away from its mark stays off the hatch or is left
-// out). The choice is deterministic. It does not take the spot.
+// out). The far search is skipped where one for a label of the same box,
+// clear radius and no less reach found no room from an anchor within
+// missR (see missedNear). The choice is deterministic. It does not take
+// the spot.
 func (p *placer) find(w want, far []float64) (spot, bool) {
 	best, bestCost := spot{}, math.Inf(1)
 	nearHatch := false
@@ -277,6 +347,9 @@ func (p *placer) find(w want, far []float64) (spot, bool) {
 	reach := float64(hatchReach)
 	for _, d := range far {
 		reach = math.Max(reach, d)
+	}
+	if p.missedNear(w, reach) {
+		return best, !math.IsInf(bestCost, 1)
 	}
 	cs := p.farCands(w, reach)
 	for len(cs) > 0 {
@@ -311,7 +384,57 @@ func (p *placer) find(w want, far []float64) (spot, bool) {
 		}
 		best, bestCost = s, cost
 	}
+	if math.IsInf(bestCost, 1) {
+		// every candidate was tried and none had room
+		p.missed(w, reach)
+	}
 	return best, !math.IsInf(bestCost, 1)
+}
+
+// missR is how near (mm) to the anchor of a label whose far search found
+// no room another label's anchor must lie for find to give up its far
+// search: in a crowd the labels that are left over would each try every
+// spot round the same pile in vain.
+const missR = 0.1
+
+// miss is a far search that found no room.
+type miss struct {
+	at                 Pt
+	w, h, clear, reach float64
+}
+
+// missCell returns the cell of side missR that holds q.
+func missCell(q Pt) [2]int { return [2]int{int(math.Floor(q.X / missR)), int(math.Floor(q.Y / missR))} }
+
+// missed records that the far search for w within reach found no room.
+func (p *placer) missed(w want, reach float64) {
+	if p.misses == nil {
+		p.misses = make(map[[2]int][]miss)
+	}
+	k := missCell(w.anchor)
+	p.misses[k] = append(p.misses[k], miss{at: w.anchor, w: w.w, h: w.h, clear: w.clear, reach: reach})
+}
+
+// missedNear reports whether a far search for a label no smaller than w,
+// with the same clear radius and at least the same reach, found no room
+// from an anchor within missR of w's. Taken boxes are never given back,
+// so from the same anchor the search would find no room again; from one
+// a fraction of a millimetre away it would try the same crowded spots.
+func (p *placer) missedNear(w want, reach float64) bool {
+	if len(p.misses) == 0 {
+		return false
+	}
+	k := missCell(w.anchor)
+	for gx := k[0] - 1; gx <= k[0]+1; gx++ {
+		for gy := k[1] - 1; gy <= k[1]+1; gy++ {
+			for _, m := range p.misses[[2]int{gx, gy}] {
+				if m.w == w.w && m.h == w.h && m.clear == w.clear && m.reach >= reach && dist(m.at, w.anchor) <= missR {
+					return true
+				}
+			}
+		}
+	}
+	return false
 }
 
 // hang returns the box of w hung from q in direction v: scaling v to unit

@@ -87,13 +87,7 @@ func (v *planView) reference() {
 	}
 	best, bestN := corners[0], math.MaxInt
 	for _, c := range corners {
-		n := 0
-		v.pl.visit(c, func(it *pitem) bool {
-			if !it.seg && it.r.Overlaps(c, 0) {
-				n++
-			}
-			return true
-		})
+		n := v.pl.boxesOver(c)
 		for _, p := range v.pos {
 			if p.X >= c.X && p.X <= c.Right() && p.Y >= c.Y && p.Y <= c.Bottom() {
 				n += 3
