@@ -58,7 +58,7 @@ func planCheck(req *planner.Request) ([]layout.Warning, error) {
 		return nil, layout.Locate(req, err)
 	}
 	var warns []layout.Warning
-	if err := sheet.Write(io.Discard, p, sheet.Options{}); errors.Is(err, sheet.ErrScale) {
+	if err := sheet.Write(io.Discard, p, sheet.Options{}); errors.Is(err, sheet.ErrScale) || errors.Is(err, sheet.ErrPaperRoom) {
 		warns = append(warns, layout.Warning{File: req.Source, Field: "sheet", Msg: strings.TrimPrefix(err.Error(), "sheet: ") + " (plan --pdf needs --paper or --scale)"})
 	} else if err != nil {
 		return nil, layout.Locate(req, err)

@@ -53,8 +53,16 @@ type builder struct {
 	ranges    string   // the first range label on the plan, "" if none
 	cropped   bool     // the plan shows the region of interest, not the whole cell
 	details   []detail // the detail views of dense arrays
-	// warningsShown counts the plan's warnings (safety first) on sheet 1
-	warningsShown int
+	// warningsShown are the plan's warnings (indices in Plan.Warnings)
+	// printed in full on sheet 1
+	warningsShown map[int]bool
+	// safetySize is the type size of the safety content on sheet 1, pt
+	safetySize float64
+	// notesLater are the notes on the plan when they did not fit sheet 1
+	notesLater []string
+	// legendLater: the legend did not fit sheet 1 and opens the flow
+	// after the set-up steps
+	legendLater bool
 	// hazardsDrawn are the hazards marked on the plan
 	hazardsDrawn []hazard
 	noise        *planner.NoiseMap // the predicted noise contours; nil when noiseErr says why
@@ -90,7 +98,7 @@ func Build(p *planner.Plan, opt Options) (*Model, error) {
 	b := &builder{
 		plan: p, req: req, gov: &p.Points[p.Governing], lim: limits(req.Limits),
 		pr: printer{sys: req.Units, conv: req.Convention}, m: newMeter(),
-		model: &Model{Paper: paper},
+		model: &Model{Paper: paper}, warningsShown: map[int]bool{},
 	}
 	b.frame = Rect{marginLeft, marginOther, paper.Width - marginLeft - marginOther, paper.Height - 2*marginOther}
 	b.colW = columnWidth(b.frame.W)
@@ -115,6 +123,7 @@ func Build(p *planner.Plan, opt Options) (*Model, error) {
 		return nil, err
 	}
 	b.continuation()
+	b.pointers()
 	b.finish()
 	return m, nil
 }
@@ -244,6 +253,39 @@ func (b *builder) continuation() {
 	b.model.Pages = best
 }
 
+// pointers puts the numbers of the sheets that the pointers on sheet 1
+// name: the first sheet after it that carries the heading pointed to.
+func (b *builder) pointers() {
+	for _, k := range []struct{ prefix, heading string }{
+		{"Notes on the plan: ", notesHeading},
+		{"Legend of the plan: ", legendHeading},
+		{"", warningsHeading},
+	} {
+		n := 0
+		for i := 1; i < len(b.model.Pages) && n == 0; i++ {
+			for _, t := range b.model.Pages[i].Texts {
+				if strings.HasPrefix(t.Text, k.heading) {
+					n = i + 1
+					break
+				}
+			}
+		}
+		if n == 0 {
+			continue
+		}
+		pg := &b.model.Pages[0]
+		for j := range pg.Texts {
+			t := pg.Texts[j].Text
+			if !strings.Contains(t, laterMark) {
+				continue
+			}
+			if k.prefix != "" && strings.HasPrefix(t, k.prefix) || k.prefix == "" && !strings.HasPrefix(t, "Notes on the plan: ") && !strings.HasPrefix(t, "Legend of the plan: ") {
+				pg.Texts[j].Text = strings.Replace(t, laterMark, fmt.Sprintf("sheet %d", n), 1)
+			}
+		}
+	}
+}
+
 // detailsLater ends the plan's note on the detail views as the plan view
 // writes it (details.go).
 const detailsLater = "enlarged on the first sheet after this one."
@@ -304,6 +346,32 @@ func (b *builder) flowSheets(f *flow) {
 	f.gap(4)
 	f.columns("SET-UP STEPS (for this plan; positions from the datum)", b.steps())
 	f.gap(3)
+	if b.legendLater {
+		f.figures("legend", func(g *flow) {
+			w := math.Min(g.area.W, b.colW-3)
+			g.y = b.legend(g.page, Rect{g.area.X, g.y, w, 0})
+		})
+		f.gap(3)
+	}
+	if len(b.notesLater) > 0 {
+		var ls []textLine
+		for _, n := range b.notesLater {
+			ls = append(ls, textLine{text: n, whole: true})
+		}
+		f.columns(notesHeading, ls)
+		f.gap(3)
+	}
+	// every warning not printed in full on sheet 1, each whole
+	var ls []textLine
+	for i, w := range b.plan.Warnings {
+		if !b.warningsShown[i] {
+			ls = append(ls, textLine{text: "• " + w, whole: true})
+		}
+	}
+	if len(ls) > 0 {
+		f.columns(warningsHeading, ls)
+		f.gap(3)
+	}
 	f.figures("views", b.sideViews)
 	f.figures("details", func(g *flow) { g.details(b.details) })
 	if len(b.model.Key) > 0 && !b.keyPlaced {
@@ -333,15 +401,6 @@ func (b *builder) flowSheets(f *flow) {
 	for _, lt := range b.absorption {
 		f.gap(3)
 		f.placeTable(lt)
-	}
-	// the warnings that did not fit sheet 1's panel, each whole
-	if rest := b.safetyFirst()[b.warningsShown:]; len(rest) > 0 {
-		f.gap(3)
-		var ls []textLine
-		for _, w := range rest {
-			ls = append(ls, textLine{text: "• " + w, whole: true})
-		}
-		f.columns("PLANNER WARNINGS (continued from sheet 1)", ls)
 	}
 	f.flush()
 }

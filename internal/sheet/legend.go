@@ -138,7 +138,11 @@ func (b *builder) legend(pg *Page, r Rect) float64 {
 	sz := sizeSmall
 	lh := lineHeight(sz)
 	y := r.Y + pad + capHeight(sizeHeading)
-	pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sizeHeading, true, "LEGEND"))
+	head := "LEGEND"
+	if b.legendLater {
+		head = legendHeading
+	}
+	pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sizeHeading, true, head))
 	y += 1.5
 	entries := b.legendEntries()
 	if len(b.model.Key) > 0 {

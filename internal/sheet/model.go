@@ -197,6 +197,7 @@ type Page struct {
 	Texts      []Text
 	Labels     []Label
 	Tables     []Table
+	Panels     []Panel `json:",omitempty"`
 }
 
 // Model is a laid-out sheet set, ready to render: everything the PDF shows,
@@ -218,7 +219,27 @@ type Model struct {
 	// Unlabelled lists the stations that got neither an ID nor a key number
 	// on the plan (their positions are in the station table).
 	Unlabelled []string
-	Pages      []Page
+	// Warnings are the lines of the warnings panel on sheet 1, each with
+	// the plan's warnings it stands for.
+	Warnings []WarningLine `json:",omitempty"`
+	Pages    []Page
+}
+
+// WarningLine is one line of the warnings panel on sheet 1.
+type WarningLine struct {
+	Text string
+	// Warnings are the indices in Plan.Warnings of the warnings it
+	// stands for: one, or one of a kind for several operating points.
+	Warnings []int
+	Safety   bool    // a safety warning
+	Size     float64 // type size, pt
+}
+
+// Panel is a boxed block of text on a sheet: the safety panel, the
+// warnings, the legend, the notes, the label key.
+type Panel struct {
+	Name string
+	Box  Rect
 }
 
 // MarshalJSON writes the point as the string "x y", each rounded to

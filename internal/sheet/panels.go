@@ -41,25 +41,192 @@ func (b *builder) scaleStrip(pg *Page, vf Rect) {
 	}
 }
 
-// column lays out the right-hand column of sheet 1: the cautions, the
-// legend, the notes and, when it fits, the label key.
-func (b *builder) column(pg *Page, notes []string) {
-	col := Rect{b.frame.Right() - b.colW, b.frame.Y, b.colW, b.frame.H - titleH - gapMM}
+// minSafetySize is the smallest type of the safety panel and of the
+// safety warnings on sheet 1, pt: a 6-pt body is 2.1 mm high (1 pt =
+// 0.3528 mm), about the 2 mm that common practice takes as the least text
+// height legible on a print (FROM MEMORY: ISO 3098-0's smallest nominal
+// height is 1.8 mm). They are set in sizeBody and shrink to it only when
+// sheet 1 is short of room.
+const minSafetySize = 6.0
+
+// safetySizes are the type sizes tried for the safety content, pt.
+var safetySizes = []float64{sizeBody, 6.25, minSafetySize}
+
+// laterMark stands for the number of a later sheet in a pointer on sheet 1
+// until the flow has placed what it points to.
+const laterMark = "sheet_?"
+
+// Headings on the later sheets that sheet 1 points to.
+const (
+	notesHeading    = "NOTES ON THE PLAN (from sheet 1)"
+	legendHeading   = "LEGEND OF THE PLAN (sheet 1)"
+	warningsHeading = "PLANNER WARNINGS IN FULL (sheet 1 groups the safety warnings by kind)"
+)
+
+// columnPlan is how the column of sheet 1 holds its panels.
+type columnPlan struct {
+	size    float64    // type size of the safety content, pt
+	shown   []warnLine // the warning lines on sheet 1
+	pointer []string   // lines pointing to later sheets
+	notes   bool       // the notes are on sheet 1
+	legend  bool       // the legend is on sheet 1
+}
+
+// planColumn chooses, for a column of width w and height h (mm), the
+// largest type for the safety content and what else goes on sheet 1:
+// the safety panel and every safety warning always; then the legend, the
+// notes and the other warnings, in that order, when there is room; what
+// does not fit moves to a later sheet with a pointer. ok is false when the
+// safety content does not fit even in minSafetySize.
+func (b *builder) planColumn(w, h float64, lines []warnLine, notes []string) (columnPlan, bool) {
+	var safe, all []warnLine
+	verbatim := true
+	for _, l := range lines {
+		all = append(all, l)
+		if l.safety {
+			safe = append(safe, l)
+			verbatim = verbatim && len(l.of) == 1 && l.text == b.plan.Warnings[l.of[0]]
+		}
+	}
+	scratch := Rect{0, 0, w, 0}
+	legendH := b.legend(&Page{}, scratch)
+	notesH := b.notesPanel(&Page{}, scratch, notes)
+	defer func(s float64) { b.safetySize = s }(b.safetySize)
+	for _, s := range safetySizes {
+		b.safetySize = s
+		cautH := b.cautions(&Page{}, scratch)
+		for _, o := range []struct{ legend, others, notes bool }{
+			{true, true, true}, {true, false, true}, {true, true, false}, {true, false, false}, {false, false, false},
+		} {
+			cp := columnPlan{size: s, notes: o.notes, legend: o.legend, shown: safe}
+			if o.others {
+				cp.shown = all
+			}
+			if !o.legend {
+				cp.pointer = append(cp.pointer, "Legend of the plan: "+laterMark+".")
+			}
+			if !o.notes {
+				cp.pointer = append(cp.pointer, "Notes on the plan: "+laterMark+".")
+			}
+			if n := len(all) - len(safe); !o.others && n > 0 {
+				cp.pointer = append(cp.pointer, fmt.Sprintf("%s (not about safety), and every warning in full: %s.", plural(n, "other warning"), laterMark))
+			} else if !verbatim {
+				cp.pointer = append(cp.pointer, "Every warning in full: "+laterMark+".")
+			}
+			need := cautH
+			if o.legend {
+				need += gapMM + legendH
+			}
+			if len(cp.shown)+len(cp.pointer) > 0 {
+				need += gapMM + b.warningsPanel(&Page{}, scratch, cp.shown, cp.pointer)
+			}
+			if o.notes {
+				need += gapMM + notesH
+			}
+			if need <= h {
+				return cp, true
+			}
+		}
+	}
+	return columnPlan{}, false
+}
+
+// columnRect returns the right-hand column of sheet 1 above the title
+// block.
+func (b *builder) columnRect() Rect {
+	return Rect{b.frame.Right() - b.colW, b.frame.Y, b.colW, b.frame.H - titleH - gapMM}
+}
+
+// column lays out the right-hand column of sheet 1: the safety panel, the
+// warnings (every safety warning, in type no smaller than minSafetySize),
+// the legend, the notes and, when it fits, the label key. It returns an
+// error wrapping ErrPaperRoom when the safety content does not fit,
+// naming the papers where it does.
+func (b *builder) column(pg *Page, notes []string) error {
+	col := b.columnRect()
+	x, w := col.X+1.5, col.W-3
+	lines := b.warningLines()
+	notes = b.notesList(notes)
+	cp, ok := b.planColumn(w, col.H-1.5, lines, notes)
+	if !ok {
+		return b.noRoom(lines, notes)
+	}
+	b.safetySize = cp.size
+	panel := func(name string, y0, y1 float64) {
+		pg.Panels = append(pg.Panels, Panel{Name: name, Box: Rect{x, y0, w, y1 - y0}})
+	}
 	y := col.Y + 1.5
-	y = b.cautions(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
-	y = b.legend(pg, Rect{col.X + 1.5, y, col.W - 3, 0}) + gapMM
-	y = b.notesPanel(pg, Rect{col.X + 1.5, y, col.W - 3, 0}, notes) + gapMM
-	// the warnings panel needs room for its heading and one line at least
-	// (all warnings are printed in full on a later sheet)
-	if need := 4 + capHeight(sizeHeading) + 0.8 + 2*lineHeight(sizeSmall); len(b.plan.Warnings) > 0 && col.Bottom()-y >= need {
-		y = b.warningsPanel(pg, Rect{col.X + 1.5, y, col.W - 3, col.Bottom() - y}) + gapMM
+	y0 := y
+	y = b.cautions(pg, Rect{x, y, w, 0})
+	panel("safety", y0, y)
+	y += gapMM
+	if len(cp.shown)+len(cp.pointer) > 0 {
+		y0 = y
+		y = b.warningsPanel(pg, Rect{x, y, w, 0}, cp.shown, cp.pointer)
+		panel("warnings", y0, y)
+		y += gapMM
+		for _, l := range cp.shown {
+			if len(l.of) == 1 && l.text == b.plan.Warnings[l.of[0]] {
+				b.warningsShown[l.of[0]] = true
+			}
+		}
+		b.model.Warnings = nil
+		for _, l := range cp.shown {
+			b.model.Warnings = append(b.model.Warnings, WarningLine{Text: clean(l.text), Warnings: l.of, Safety: l.safety, Size: cp.size})
+		}
+	}
+	if cp.legend {
+		y0 = y
+		y = b.legend(pg, Rect{x, y, w, 0})
+		panel("legend", y0, y)
+		y += gapMM
+	} else {
+		b.legendLater = true
+	}
+	if cp.notes {
+		y0 = y
+		y = b.notesPanel(pg, Rect{x, y, w, 0}, notes)
+		panel("notes", y0, y)
+		y += gapMM
+	} else {
+		b.notesLater = notes
 	}
 	if len(b.model.Key) > 0 {
-		if h := b.keyHeight(col.W - 3); y+h <= col.Bottom() {
-			b.keyPanel(pg, Rect{col.X + 1.5, y, col.W - 3, h})
+		if h := b.keyHeight(w); y+h <= col.Bottom() {
+			b.keyPanel(pg, Rect{x, y, w, h})
+			panel("key", y, y+h)
 			b.keyPlaced = true
 		}
 	}
+	return nil
+}
+
+// noRoom returns the error of a paper whose sheet 1 has no room for the
+// safety content, naming the papers that have.
+func (b *builder) noRoom(lines []warnLine, notes []string) error {
+	n := 0
+	for _, l := range lines {
+		if l.safety {
+			n += len(l.of)
+		}
+	}
+	var fit []string
+	for _, p := range papers {
+		if p.Name == b.model.Paper.Name {
+			continue
+		}
+		fw, fh := p.Width-marginLeft-marginOther, p.Height-2*marginOther
+		if _, ok := b.planColumn(columnWidth(fw)-3, fh-titleH-gapMM-1.5, lines, notes); ok {
+			fit = append(fit, p.Name)
+		}
+	}
+	way := "no paper offered has room for them"
+	_ = notes
+	if len(fit) > 0 {
+		way = "use a paper that has room: " + joinOr(fit)
+	}
+	return fmt.Errorf("%w: sheet 1 of %s has no room beside the plan for the safety panel and all %s, even in %g-pt type (the smallest kept legible); a sheet 1 that leaves out a safety warning is not issued: %s",
+		ErrPaperRoom, b.model.Paper.Name, plural(n, "safety warning"), minSafetySize, way)
 }
 
 // hazardStatement is the safety panel's first line: the hazard and its
@@ -81,9 +248,9 @@ func (b *builder) cautionItems() []string {
 		"HOT-EXHAUST AND HIGH-VELOCITY ZONES (hatched): no person, stand or cable inside them, or inside their margins (dotted), while the jet runs.",
 		fmt.Sprintf("The zones are predictions of the MEAN flow: turbulent gusts are well above the mean. Drawn: velocity zone where the mean velocity exceeds %s, hot zone where the total temperature exceeds %s, each with a margin of %s. The envelopes use the conservative end of the published scatter.",
 			pr.speed(b.lim.Velocity), pr.temp(b.lim.Temperature), pr.length(b.lim.Margin)),
-		b.drawnWhat() + " Every station was checked against every operating point.",
+		"Every station was checked against every operating point; the zones drawn are named under the plan.",
 		"Bent (rising) and wall-jet zones are drawn and checked too; their scatter is wider than the free jet's: keep well clear of every surface the exhaust strikes.",
-		"NOISE: wear hearing protection in and near the cell. Keep out of the cell during runs. The predicted levels and contours are estimates (about ±3 dB at best); hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice.",
+		"NOISE: wear hearing protection in and near the cell. Keep out of the cell during runs. The predicted levels and contours are estimates (about ±3 dB at best).",
 		"Before every run: clearances re-measured, nothing loose in the zones, cables secured outside the zones, people out of the cell, headcount done.",
 		"Nozzle, ducting and plume-side hardware stay hot after shutdown.",
 		"Follow the facility's safety procedures, local codes and licensed practice; they take precedence over this sheet.",
@@ -119,7 +286,10 @@ func (b *builder) drawnWhat() string {
 func (b *builder) cautions(pg *Page, r Rect) float64 {
 	const pad = 2.5
 	const bandH = 7.5
-	sz := sizeBody
+	sz := b.safetySize
+	if sz == 0 {
+		sz = sizeBody
+	}
 	lh := lineHeight(sz)
 	pg.Shapes = append(pg.Shapes, rectShape(StyleSignal, Rect{r.X, r.Y, r.W, bandH}))
 	// the safety alert symbol: a black triangle with an exclamation mark in
@@ -155,48 +325,31 @@ func (b *builder) cautions(pg *Page, r Rect) float64 {
 	return bottom
 }
 
-// safetyFirst returns the plan's warnings, those about the flow leaving
-// the free-jet model (a wall jet where a zone meets a surface or an
-// obstacle, a buoyant bend) first, each group in the plan's order.
-func (b *builder) safetyFirst() []string {
-	var first, rest []string
-	for _, w := range b.plan.Warnings {
-		l := strings.ToLower(w)
-		if strings.Contains(l, "wall jet") || strings.Contains(l, "buoyan") || strings.Contains(l, "strikes") || strings.Contains(l, "reaches the") {
-			first = append(first, w)
-		} else {
-			rest = append(rest, w)
-		}
-	}
-	return append(first, rest...)
-}
-
-// warningsPanel prints the plan's warnings at r, the safety ones first,
-// as many as fit in r's height, and returns the y of its bottom. Those
-// that do not fit are counted; all are printed in full on a later sheet.
-func (b *builder) warningsPanel(pg *Page, r Rect) float64 {
+// warningsPanel prints the warning lines ls at r (its height grows to
+// fit) in the safety content's type, then the pointers to later sheets in
+// bold, and returns the y of its bottom.
+func (b *builder) warningsPanel(pg *Page, r Rect, ls []warnLine, pointer []string) float64 {
 	const pad = 2.0
-	sz := sizeSmall
+	sz := b.safetySize
+	if sz == 0 {
+		sz = sizeBody
+	}
 	lh := lineHeight(sz)
 	y := r.Y + pad + capHeight(sizeHeading)
 	head := "WARNINGS FROM THE PLAN"
 	if len(b.hazardsDrawn) > 0 {
 		head += " (a triangle on the plan marks where)"
 	}
-	pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sizeHeading, true, head))
-	y += 0.8
-	ws := b.safetyFirst()
-	indent := b.m.width("• ", sz, false)
-	for i, w := range ws {
-		lines := b.m.wrap(clean(w), r.W-2*pad-indent, sz, false)
-		if y+float64(len(lines)+1)*lh+pad > r.Bottom() {
-			y += lh
-			pg.Texts = append(pg.Texts, Text{X: r.X + pad, Y: y, Size: sz, Bold: true,
-				Text: clean(plural(len(ws)-i, "more warning") + ": see PLANNER WARNINGS on a later sheet.")})
-			break
+	for i, l := range b.m.wrap(clean(head), r.W-2*pad, sizeHeading, true) {
+		if i > 0 {
+			y += lineHeight(sizeHeading)
 		}
-		b.warningsShown = i + 1
-		for j, l := range lines {
+		pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sizeHeading, true, l))
+	}
+	y += 0.8
+	indent := b.m.width("• ", sz, false)
+	for _, w := range ls {
+		for j, l := range b.m.wrap(clean(w.text), r.W-2*pad-indent, sz, false) {
 			y += lh
 			if j == 0 {
 				pg.Texts = append(pg.Texts, b.text(r.X+pad, y, sz, false, "•"))
@@ -205,13 +358,20 @@ func (b *builder) warningsPanel(pg *Page, r Rect) float64 {
 		}
 		y += 0.4
 	}
+	for _, p := range pointer {
+		for _, l := range b.m.wrap(clean(p), r.W-2*pad, sz, true) {
+			y += lh
+			pg.Texts = append(pg.Texts, Text{X: r.X + pad, Y: y, Size: sz, Bold: true, Text: l})
+		}
+	}
 	bottom := y + pad
 	pg.Shapes = append(pg.Shapes, rectShape(StyleCaution, Rect{r.X, r.Y, r.W, bottom - r.Y}))
 	return bottom
 }
 
-// notesPanel prints the plan's notes at r and returns the y of its bottom.
-func (b *builder) notesPanel(pg *Page, r Rect, extra []string) float64 {
+// notesList returns the notes on the plan: the station count, extra (the
+// plan view's notes) and the notes on labels and sheets.
+func (b *builder) notesList(extra []string) []string {
 	p := b.plan
 	notes := []string{
 		fmt.Sprintf("Stations: %d ok, %d with a warning, %d blocked (of %d).", p.OK, p.Warn, p.Blocked, len(p.Stations)),
@@ -227,7 +387,11 @@ func (b *builder) notesPanel(pg *Page, r Rect, extra []string) float64 {
 		notes = append(notes, fmt.Sprintf("Not labelled for lack of room (%s): %s. Their positions are in the station table.",
 			plural(n, "station"), idList(b.model.Unlabelled)))
 	}
-	notes = append(notes, "Set-out table and set-up steps: sheet 2; then the elevation, details and tables.")
+	return append(notes, "Set-out table and set-up steps: sheet 2; then the elevation, details and tables.")
+}
+
+// notesPanel prints the notes at r and returns the y of its bottom.
+func (b *builder) notesPanel(pg *Page, r Rect, notes []string) float64 {
 	const pad = 2.0
 	sz := sizeSmall
 	lh := lineHeight(sz)

@@ -128,8 +128,7 @@ func (b *builder) planPage(asked int, field string) error {
 	pg.Labels = v.labels
 	pg.Texts = append(pg.Texts, v.refTexts...)
 	b.scaleStrip(pg, vf)
-	b.column(pg, v.notes)
-	return nil
+	return b.column(pg, v.notes)
 }
 
 // grid draws the light coordinate grid from the datum and labels it at the

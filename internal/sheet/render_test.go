@@ -249,7 +249,7 @@ func TestWarningsOnSheetOne(t *testing.T) {
 			if !strings.Contains(text, "WARNINGS FROM THE PLAN") {
 				t.Fatal("sheet 1 has no warnings panel")
 			}
-			if !strings.Contains(text, "as a wall jet") {
+			if !strings.Contains(text, "P: the velocity zone reaches the floor") || !strings.Contains(text, "wall jet there") {
 				t.Error("the wall-jet warning is not on sheet 1")
 			}
 			marks := 0
