@@ -35,7 +35,7 @@ var short = map[string]struct {
 	last  float64
 }{
 	"anechoic-model-jet":    {2, minFill}, // its near-field detail takes a sheet
-	"anechoic-model-jet/A4": {2, minFill},
+	"anechoic-model-jet/A4": {3, minFill}, // its legend, notes and the warnings in full move off sheet 1 too
 	"outdoor-static-pad/A4": {3, 0.12},
 	"few stations":          {1, 0.10}, // its narrow tables go down beside the title block of sheet 2: points and absorption alone are left for the last
 	"500 stations":          {3, minFill},
