@@ -117,6 +117,16 @@ func checkPaper(s string) error {
 }
 
 func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error) {
+	req, err := loadRequest(path, unitsOverride)
+	if err != nil {
+		return nil, err
+	}
+	return planRequest(req, asBuilt)
+}
+
+// loadRequest reads the layout at path, in the unit system unitsOverride
+// names ("" keeps the layout's).
+func loadRequest(path, unitsOverride string) (*planner.Request, error) {
 	req, _, err := layout.Load(path)
 	if err != nil {
 		return nil, err
@@ -127,6 +137,12 @@ func loadPlan(path, unitsOverride string, asBuilt string) (*planner.Plan, error)
 	case "imperial":
 		req.Units = units.Imperial
 	}
+	return req, nil
+}
+
+// planRequest plans req, with the as-built file asBuilt ("" none).
+func planRequest(req *planner.Request, asBuilt string) (*planner.Plan, error) {
+	var err error
 	if asBuilt != "" {
 		req.AsBuilt, err = layout.LoadAsBuilt(asBuilt, req)
 		if err != nil {
@@ -189,7 +205,17 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	if err := checkOutputs(outs, ins); err != nil {
 		return err
 	}
-	if p, err = loadPlan(o.Layout, o.Units, ""); err != nil {
+	req, err := loadRequest(o.Layout, o.Units)
+	if err != nil {
+		return err
+	}
+	// one family of scales per sheet: checked before planning
+	if scale != 0 {
+		if err := sheet.CheckScale(scale, req.Units); err != nil {
+			return usageError{fmt.Errorf("--scale %q: %s", o.Scale, strings.TrimPrefix(err.Error(), sheet.ErrScale.Error()+": "))}
+		}
+	}
+	if p, err = planRequest(req, ""); err != nil {
 		return err
 	}
 	// every file is written to a temporary first: a failure leaves none

@@ -49,14 +49,46 @@ func TestPlanSheetFlags(t *testing.T) {
 			}
 		})
 	}
-	// the new papers and the feet-and-inches scales are accepted
-	for _, args := range [][]string{
-		{"--paper", "A0"}, {"--paper", "ANSI D", "--scale", "1:75"}, {"--paper", "arch-d"},
-		{"--paper", "Tabloid", "--scale", `1" = 20'`},
+	// one family of scales per sheet: a scale of the other unit system is
+	// refused before planning, exit 2, naming the scales of the sheet's
+	// system (review: 1" = 20' on the metric chamber printed "Scale
+	// 1:240"; 1:5000 on a feet-and-inches site drew the plan at 1:5000 and
+	// the elevation at 1" = 200')
+	for _, tt := range []struct {
+		name, layout, scale string
+		want                []string
+	}{
+		{"imperial scale on a metric sheet", "anechoic-model-jet.yaml", `1" = 20'`, []string{`1" = 20'`, "feet-and-inches scale", "metric sheet", "1:50", "1:5000"}},
+		{"metric scale on a feet-and-inches sheet", "outdoor-static-pad.yaml", "1:5000", []string{"1:5000", "metric scale", "feet-and-inches sheet", `1" = 10'`, "500'", `1/4"`}},
 	} {
-		a := append([]string{"plan", filepath.Join(demoDir, "hard-wall-exhaust-room.yaml"), "--pdf", pdf}, args...)
+		t.Run(tt.name, func(t *testing.T) {
+			_, errOut, code := arc(t, "plan", filepath.Join(demoDir, tt.layout), "--pdf", pdf, "--scale", tt.scale)
+			if code != exitUsage {
+				t.Errorf("got exit %d, want %d; stderr %q", code, exitUsage, errOut)
+			}
+			for _, w := range tt.want {
+				if !strings.Contains(errOut, w) {
+					t.Errorf("stderr %q lacks %q", errOut, w)
+				}
+			}
+			if _, err := os.Stat(pdf); err == nil {
+				t.Error("a PDF was written")
+			}
+		})
+	}
+	// the new papers and the scales of the sheet's family are accepted
+	for _, tt := range []struct {
+		layout string
+		args   []string
+	}{
+		{"hard-wall-exhaust-room.yaml", []string{"--paper", "A0"}},
+		{"hard-wall-exhaust-room.yaml", []string{"--paper", "ANSI D", "--scale", "1:75"}},
+		{"hard-wall-exhaust-room.yaml", []string{"--paper", "arch-d"}},
+		{"outdoor-static-pad.yaml", []string{"--paper", "ANSI D", "--scale", `1" = 50'`}},
+	} {
+		a := append([]string{"plan", filepath.Join(demoDir, tt.layout), "--pdf", pdf}, tt.args...)
 		if _, errOut, code := arc(t, a...); code != exitOK {
-			t.Errorf("%v: got exit %d, want 0; stderr %q", args, code, errOut)
+			t.Errorf("%s %v: got exit %d, want 0; stderr %q", tt.layout, tt.args, code, errOut)
 		}
 	}
 }

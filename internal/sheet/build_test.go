@@ -98,6 +98,8 @@ func TestBuildPaperAndScale(t *testing.T) {
 		{name: "scale that does not fit", plan: chamberPlan, opt: sheet.Options{Scale: 20}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "1:20", "1:50 fits on A3", "A1 paper holds it at 1:20"}},
 		{name: "negative scale", plan: chamberPlan, opt: sheet.Options{Scale: -50}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "not a standard scale"}},
 		{name: "odd scale", plan: chamberPlan, opt: sheet.Options{Scale: 7}, err: sheet.ErrScale, errSubstr: []string{"1:7", "not a standard scale", "1:75"}},
+		// one family of scales per sheet (review: 1" = 20' on a metric sheet printed "Scale 1:240")
+		{name: "imperial scale on a metric sheet", plan: chamberPlan, opt: sheet.Options{Scale: 240}, err: sheet.ErrScale, errSubstr: []string{`1" = 20'`, "feet-and-inches scale", "metric sheet", "1:50"}},
 		// a feet-and-inches sheet takes the engineer's 1" = 20' (1:240):
 		// the pad's 60 stations need 1:200, which is not one of them
 		{name: "pad at 1 in = 20 ft", plan: func(t testing.TB) *planner.Plan { return padPlan(t, 60) }, paper: "A3", scale: 240},

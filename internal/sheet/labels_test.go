@@ -66,9 +66,8 @@ func TestEveryStationIsNamedOnce(t *testing.T) {
 	for _, n := range []int{60, 500} {
 		t.Run(fmt.Sprint(n), func(t *testing.T) {
 			p := padPlan(t, n)
-			// 1:200 (the metric scale a feet-and-inches sheet may still be
-			// asked for): the engineer's 1:240 it would choose crowds more
-			m := build(t, p, sheet.Options{Scale: 200})
+			// 1" = 20' (1:240), an engineer's scale that crowds the plan
+			m := build(t, p, sheet.Options{Scale: 240})
 			seen := map[string]int{}
 			index := map[string]int{}
 			for i, s := range p.Stations {

@@ -136,5 +136,8 @@ func resolveScale(opt Options, req *planner.Request) (int, string, error) {
 	if !isStandard(s) {
 		return 0, field, fmt.Errorf("%w: %s, 1:%d, is not a standard scale: want one of %s", ErrScale, field, s, ScaleNames())
 	}
+	if r := otherFamily(s, req.Units); r != "" {
+		return 0, field, fmt.Errorf("%w: %s: %s", ErrScale, field, r)
+	}
 	return s, field, nil
 }

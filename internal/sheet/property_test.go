@@ -188,6 +188,20 @@ func TestSheetProperty(t *testing.T) {
 		}
 	}
 	for k, s := range scales {
-		try(k%layouts, papers[k%len(papers)].Name, s)
+		// a plan whose sheet's family holds the scale; the other family is
+		// refused (one family of scales per sheet)
+		i := k % layouts
+		for n := 0; n < layouts && sheet.CheckScale(s, plans[i].Request.Units) != nil; n++ {
+			i = (i + 1) % layouts
+		}
+		try(i, papers[k%len(papers)].Name, s)
+		for j := range plans {
+			if err := sheet.CheckScale(s, plans[j].Request.Units); err != nil {
+				if _, err := sheet.Build(plans[j], sheet.Options{Scale: s}); !errors.Is(err, sheet.ErrScale) || !strings.Contains(err.Error(), "one family of scales per sheet") {
+					t.Errorf("layout %d (%s) at 1:%d: got %v, want the scale refused as of the other family", j, plans[j].Request.Units, s, err)
+				}
+				break
+			}
+		}
 	}
 }

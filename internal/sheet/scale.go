@@ -80,10 +80,21 @@ func ScaleName(den int, sys units.System) string {
 
 // ScaleNames lists the accepted scales for messages and help.
 func ScaleNames() string {
-	var m, arch, eng []string
-	for _, s := range metricScales {
-		m = append(m, "1:"+strconv.Itoa(s))
+	return ScaleNamesFor(units.Metric) + "; on feet-and-inches sheets " + ScaleNamesFor(units.Imperial)
+}
+
+// ScaleNamesFor lists the scales of one unit system's sheets, as its
+// drawing offices write them: "1:1, 1:2, …, 1:5000", or the architect's
+// scales 3", … 1/8" = 1'-0" and the engineer's 1" = 10', … 500'.
+func ScaleNamesFor(sys units.System) string {
+	if sys != units.Imperial {
+		var m []string
+		for _, s := range metricScales {
+			m = append(m, "1:"+strconv.Itoa(s))
+		}
+		return strings.Join(m, ", ")
 	}
+	var arch, eng []string
 	for _, s := range imperialScales {
 		if s.den < 120 {
 			arch = append(arch, strings.TrimSuffix(s.name, ` = 1'-0"`))
@@ -91,7 +102,38 @@ func ScaleNames() string {
 			eng = append(eng, strings.TrimPrefix(s.name, `1" = `))
 		}
 	}
-	return strings.Join(m, ", ") + `; on feet-and-inches sheets also ` + strings.Join(arch, ", ") + ` = 1'-0" and 1" = ` + strings.Join(eng, ", ")
+	return strings.Join(arch, ", ") + ` = 1'-0" and 1" = ` + strings.Join(eng, ", ")
+}
+
+// CheckScale reports whether 1:den is a standard scale of the family of a
+// sheet in unit system sys: a sheet keeps one family, so that its plan, its
+// elevation and its details are all read with the same rule (a
+// feet-and-inches scale on a metric sheet would print as an odd metric one,
+// 1" = 20' as 1:240; a metric one on a feet-and-inches sheet would leave the
+// elevation on an engineer's scale). The error wraps [ErrScale] and names
+// the scales of the sheet's family.
+func CheckScale(den int, sys units.System) error {
+	if !isStandard(den) {
+		return fmt.Errorf("%w: 1:%d is not a standard scale: want one of %s", ErrScale, den, ScaleNames())
+	}
+	if r := otherFamily(den, sys); r != "" {
+		return fmt.Errorf("%w: %s", ErrScale, r)
+	}
+	return nil
+}
+
+// otherFamily says why the standard scale 1:den is not of the family of a
+// sheet in unit system sys, "" when it is.
+func otherFamily(den int, sys units.System) string {
+	for _, s := range scalesFor(sys) {
+		if s == den {
+			return ""
+		}
+	}
+	if sys == units.Imperial {
+		return fmt.Sprintf("1:%d is a metric scale, and this is a feet-and-inches sheet: one family of scales per sheet; want one of %s", den, ScaleNamesFor(units.Imperial))
+	}
+	return fmt.Sprintf("%s is a feet-and-inches scale, and this is a metric sheet: one family of scales per sheet; want one of %s", ScaleName(den, units.Imperial), ScaleNamesFor(units.Metric))
 }
 
 // scaleKey normalises a written scale for comparison: no spaces, inches
