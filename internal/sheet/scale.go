@@ -80,7 +80,7 @@ func ScaleName(den int, sys units.System) string {
 
 // ScaleNames lists the accepted scales for messages and help.
 func ScaleNames() string {
-	return ScaleNamesFor(units.Metric) + "; on feet-and-inches sheets " + ScaleNamesFor(units.Imperial)
+	return ScaleNamesFor(units.Metric) + "; on feet-and-inches sheets also " + ScaleNamesFor(units.Imperial)
 }
 
 // ScaleNamesFor lists the scales of one unit system's sheets, as its
