@@ -84,7 +84,8 @@ func (v *planView) drawCarried(z zoneSet, clip []Pt) {
 
 // carried draws the bent zones of the drawn points in the elevation, about
 // the axis height z0, cut to clip; the clearance view (upper) shows the
-// meridian plane of a body of revolution and leaves them out.
+// meridian plane of a body of revolution and leaves them out (it rings
+// the stations they block instead).
 func (v *sideView) carried(z0 float64, upper bool, clip []Pt) {
 	if upper {
 		return

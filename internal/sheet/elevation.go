@@ -4,10 +4,13 @@ import (
 	"fmt"
 	"math"
 
+	"strings"
+
 	"github.com/paulmach/orb"
 	"gonum.org/v1/gonum/spatial/r3"
 
 	"arcwright/internal/geometry"
+	"arcwright/internal/planner"
 )
 
 // The side views of sheet 2 share the horizontal axis, x along the jet axis
@@ -21,7 +24,9 @@ import (
 //     axis the distance r from the jet axis: the zones are axisymmetric, so
 //     each station, drawn at its axial position and its true distance from
 //     the axis, is outside a zone exactly when its mark is outside the
-//     zone's outline there.
+//     zone's outline there. A zone bent by buoyancy or carried along a
+//     surface is no body of revolution and is not drawn there: a station
+//     it blocks is ringed, with a note to see the plan.
 //
 // When the height of a view would be a sliver at the horizontal scale, its
 // vertical scale is a larger standard scale, at most 10 times larger, and
@@ -436,6 +441,22 @@ func (b *builder) elevation(x, y, w, maxH float64, sx int) (*sideView, bool) {
 	return v, true
 }
 
+// carriedNote labels the first station ringed in the clearance view.
+const carriedNote = "ringed: blocked by a bent or carried zone, not drawn here: see the plan"
+
+// carriedBlock reports whether a zone bent by buoyancy or carried on by a
+// surface sets a failing velocity or hot-zone check of station s (the
+// planner's reason names the zone so).
+func carriedBlock(s *planner.Station) bool {
+	for _, c := range s.Checks {
+		if (c.Name == planner.CheckVelocity || c.Name == planner.CheckHot) && c.Verdict != planner.OK &&
+			(strings.Contains(c.Reason, "bent by buoyancy") || strings.Contains(c.Reason, "carried along the") || strings.Contains(c.Reason, "spread over the wall")) {
+			return true
+		}
+	}
+	return false
+}
+
 // clearance lays out the clearance view at (x, y) in an area w × maxH mm
 // at the horizontal scale sx of the elevation (0: choose).
 func (b *builder) clearance(x, y, w, maxH float64, sx int) (*sideView, bool) {
@@ -490,9 +511,23 @@ func (b *builder) clearance(x, y, w, maxH float64, sx int) (*sideView, bool) {
 		pts[i] = t.pt(st[i].Jet.X, st[i].Jet.R)
 	}
 	rr := math.Min(markRadius(pts), 0.9)
+	first := -1
 	for i := range st {
 		v.shapes = append(v.shapes, markShapes(st[i].Status, pts[i], rr)...)
 		v.pl.block(rectAround(pts[i], rr*1.15))
+		// a zone bent by buoyancy or carried along a surface is not a
+		// body of revolution: it is not drawn here, and a station it
+		// blocks is ringed
+		if carriedBlock(&st[i]) {
+			v.shapes = append(v.shapes, circle(StyleStrike, pts[i], rr*1.9))
+			v.pl.block(rectAround(pts[i], rr*2))
+			if first < 0 {
+				first = i
+			}
+		}
+	}
+	if first >= 0 {
+		v.placeText(carriedNote, pts[first], Pt{0.4, -1}, rr*2+0.3, featFar, "carried")
 	}
 	if len(st) <= maxElevationIDs {
 		for i := range st {

@@ -250,3 +250,64 @@ func q0(fp geometry.Footprint, a orb.Point, pt func(x, y float64) sheet.Pt) shee
 	}
 	return pt(best[0], best[1])
 }
+
+// TestClearanceViewRingsCarriedBlocks: the clearance view draws the free
+// zones, bodies of revolution; a station blocked by a zone bent by
+// buoyancy or carried along the ground (the pad's G-15 and G-16, 0 in
+// from the velocity zone carried along the ground) would sit outside their
+// outline there, so it is ringed and the caption says so: the caption's
+// "clear exactly when outside the outline" holds for what is drawn
+// (review of the sheet, item 4).
+func TestClearanceViewRingsCarriedBlocks(t *testing.T) {
+	p := demoPlan(t, "../../layouts/outdoor-static-pad.yaml")
+	m := build(t, p, sheet.Options{})
+	want := map[string]bool{}
+	for _, s := range p.Stations {
+		for _, c := range s.Checks {
+			if (c.Name == planner.CheckVelocity || c.Name == planner.CheckHot) && c.Verdict != planner.OK &&
+				(strings.Contains(c.Reason, "bent by buoyancy") || strings.Contains(c.Reason, "carried along the")) {
+				want[s.ID] = true
+			}
+		}
+	}
+	if !want["G-15"] || !want["G-16"] {
+		t.Fatalf("the planner no longer blocks G-15 and G-16 by a carried zone: %v", want)
+	}
+	found := false
+	for _, pg := range m.Pages {
+		for _, v := range pg.Views {
+			if v.Name != "clearance" {
+				continue
+			}
+			found = true
+			var rings []sheet.Pt
+			for _, s := range v.Shapes {
+				if s.Kind == sheet.Circle && s.Style == sheet.StyleStrike {
+					rings = append(rings, s.Points[0])
+				}
+			}
+			for _, l := range pg.Labels {
+				if l.View != "clearance" || l.Kind != sheet.StationLabel {
+					continue
+				}
+				ringed := false
+				for _, r := range rings {
+					ringed = ringed || math.Hypot(r.X-l.Anchor.X, r.Y-l.Anchor.Y) < 0.01
+				}
+				if ringed != want[l.For] {
+					t.Errorf("%s: ringed %v in the clearance view, want %v", l.For, ringed, want[l.For])
+				}
+			}
+			if len(rings) != len(want) {
+				t.Errorf("got %d ringed stations, want %d", len(rings), len(want))
+			}
+			text := sheetText(m, pg.Number-1)
+			if !strings.Contains(text, "not bodies of revolution and are not drawn here: a station they block is ringed") {
+				t.Error("the clearance view's caption does not say that bent and carried zones are not drawn and how their blocks are shown")
+			}
+		}
+	}
+	if !found {
+		t.Fatal("no clearance view")
+	}
+}
