@@ -2,6 +2,7 @@ package sheet_test
 
 import (
 	"errors"
+	"fmt"
 	"os"
 	"os/exec"
 	"path/filepath"
@@ -166,4 +167,36 @@ func TestSafetyWarningsReadBack(t *testing.T) {
 			t.Errorf("sheet 1 read back has no %q", want)
 		}
 	}
+}
+
+// TestSmallPaperRefusedForSafety: a plan with more safety warnings than
+// sheet 1 of a small paper can hold, even grouped and in 6-pt type, is
+// refused on that paper with an error that names papers that have room,
+// and each of those carries them all on sheet 1.
+func TestSmallPaperRefusedForSafety(t *testing.T) {
+	p := chamberPlan(t)
+	for i := 0; i < 30; i++ {
+		p.Warnings = append(p.Warnings, fmt.Sprintf("crew position bay %d, SP3 (and 2 other points): inside the velocity zone (mean flow above 5.0 m/s) of SP3: no one may stand here during its runs; 120 dB(A)", i+1))
+	}
+	_, err := sheet.Build(p, sheet.Options{Paper: "A4"})
+	if !errors.Is(err, sheet.ErrPaperRoom) {
+		t.Fatalf("got %v, want an ErrPaperRoom on A4", err)
+	}
+	named := 0
+	for _, o := range sheet.Papers() {
+		if !regexp.MustCompile(`[:,] ` + regexp.QuoteMeta(o.Name) + `(,| or|$)| or ` + regexp.QuoteMeta(o.Name) + `$`).MatchString(err.Error()) {
+			continue
+		}
+		named++
+		m, e := sheet.Build(p, sheet.Options{Paper: o.Name})
+		if e != nil {
+			t.Errorf("%s, named as having room: %v", o.Name, e)
+			continue
+		}
+		checkSafetyOnSheetOne(t, p, m, 6)
+	}
+	if named == 0 {
+		t.Errorf("the error names no paper with room: %v", err)
+	}
+	t.Logf("%d papers named: %v", named, err)
 }
