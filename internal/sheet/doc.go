@@ -23,9 +23,16 @@
 // with 1:25 and 1:75; on a feet-and-inches sheet the architect's and the
 // engineer's scales; the largest that fits, or the one asked for), the
 // cell, the plume zones, the arrays and stations with their labels, orange
-// warning triangles where a zone meets a surface or bends, the scale bar,
-// the safety panel (the WARNING signal word of ANSI Z535.4 and ISO 3864-2),
-// the legend, the notes, the plan's warnings and the title block. An open
+// warning triangles where the planner reports a zone reaching a surface or
+// an obstacle, buoyancy bending the jet or a crew position inside a zone
+// (hazards.go), the scale bar, the safety panel (the WARNING signal word of
+// ANSI Z535.4 and ISO 3864-2), every safety warning of the plan (one line
+// per kind, naming the operating points; warnings.go), the legend, the
+// notes and the title block. The safety content is set in 6.5 pt and
+// shrinks to no less than 6 pt when room is short; the legend, the notes
+// and the other warnings then move after the set-up steps, with a pointer
+// to their sheet, and a paper whose sheet 1 cannot hold every safety
+// warning is refused, naming the papers that can (ErrPaperRoom). An open
 // site much larger than its stations is drawn cropped to them, with break
 // marks where its boundary leaves the frame. Sheet 2 opens with the set-out
 // table; the set-up steps, the elevation (the vertical section through the
@@ -33,8 +40,10 @@
 // station at its true distance from the axis), detail views of arrays too
 // dense to label at the plan's scale, the station table (nominal and
 // as-placed radius and angle, the point of each clearance), the
-// operating-points table, the absorption table and the planner's warnings
-// follow. Every sheet has the title block in its bottom-right corner.
+// operating-points table and the absorption table follow; every warning in
+// full comes after the set-up steps. A station that a bent or carried
+// zone blocks is ringed in the clearance view, where those zones are not
+// drawn. Every sheet has the title block in its bottom-right corner.
 //
 // # Page flow
 //
