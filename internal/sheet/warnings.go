@@ -159,6 +159,10 @@ func (b *builder) warningLines() []warnLine {
 		switch kind {
 		case "impinge":
 			s = fmt.Sprintf("%s: the %s%s: wall jet there; keep stations and cables clear", pts, what, b.downstream(g.xs))
+			if strings.HasSuffix(what, "reaches the site limit") {
+				// a site limit is a line on the ground, not a wall
+				s = fmt.Sprintf("%s: the %s%s and runs on beyond it", pts, what, b.downstream(g.xs))
+			}
 		case "strike":
 			obs := "the obstacle " + g.names[0]
 			if len(g.names) > 1 {
@@ -198,6 +202,8 @@ func (b *builder) warningLines() []warnLine {
 			n := m[1]
 			if l := reLevel.FindStringSubmatch(m[3]); l != nil {
 				n += " (" + l[1] + " dB(A), " + m[2] + ")"
+			} else {
+				n += " (level not predicted, " + m[2] + ")"
 			}
 			names = append(names, n)
 		}
@@ -205,7 +211,7 @@ func (b *builder) warningLines() []warnLine {
 		if len(noise) > 1 {
 			head = "crew positions "
 		}
-		out = append(out, warnLine{text: head + strings.Join(names, ", ") + ": noise exposure limit reached without hearing protectors: hearing protection during runs, chosen under the site's procedures", of: noise, safety: true})
+		out = append(out, warnLine{text: head + strings.Join(names, ", ") + ": past a noise limit: do not stay there during runs without hearing protection chosen under the site's hearing-conservation procedures", of: noise, safety: true})
 	}
 	return append(out, others...)
 }
