@@ -434,7 +434,7 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 	switch {
 	case h < -1e-9:
 		hc.Verdict = Blocked
-		hc.Reason = fmt.Sprintf("%s below the floor", ck.m(-h))
+		hc.Reason = fmt.Sprintf("%s below the %s", ck.m(-h), ck.floorName())
 	case h > cell.Ceiling:
 		hc.Verdict = Blocked
 		hc.Reason = fmt.Sprintf("%s above the ceiling", ck.m(h-cell.Ceiling))
@@ -443,9 +443,9 @@ func (ck *checker) evaluate(st *Station, i int, arr *Array, centreX float64) {
 		hc.Reason = fmt.Sprintf("%s below the ceiling treatment, less than a quarter wavelength at %.0f Hz", ck.m(cell.Ceiling-h), ck.req.Band.Low)
 	case math.IsInf(cell.Ceiling, 1):
 		hc.Value = h
-		hc.Reason = fmt.Sprintf("%s above the floor, open sky", ck.m(h))
+		hc.Reason = fmt.Sprintf("%s above the %s, open sky", ck.m(h), ck.floorName())
 	default:
-		hc.Reason = fmt.Sprintf("%s above the floor, %s below the ceiling", ck.m(h), ck.m(cell.Ceiling-h))
+		hc.Reason = fmt.Sprintf("%s above the %s, %s below the ceiling", ck.m(h), ck.floorName(), ck.m(cell.Ceiling-h))
 	}
 	t.add(hc)
 
@@ -637,15 +637,15 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 		switch {
 		case !hard:
 			t.offer(gc, func(c Check) (reason string) {
-				reason = fmt.Sprintf("%s floor: no coherent floor reflection assumed", req.Cell.Floor)
+				reason = fmt.Sprintf("%s %s: no coherent %s reflection assumed", req.Cell.Floor, ck.floorName(), ck.floorName())
 				if req.Cell.Floor == geometry.Grass {
-					reason = "grass floor: no null predicted (finite-impedance ground); the levels add the floor image, at least its energy (up to +3 dB)"
+					reason = "grass " + ck.floorName() + ": no null predicted (finite-impedance ground); the levels add the " + ck.floorName() + " image, at least its energy (up to +3 dB)"
 				}
 				return
 			})
 		case flush:
 			t.offer(gc, func(c Check) (reason string) {
-				reason = "flush on the floor: no null; the level is doubled (subtract 6 dB)"
+				reason = "flush on the " + ck.floorName() + ": no null; the level is doubled (subtract 6 dB)"
 				return
 			})
 		default:
@@ -660,11 +660,11 @@ func (ck *checker) acoustic(st *Station, mic geometry.JetPoint, centreX float64,
 			}
 			t.offer(gc, func(c Check) (reason string) {
 				if !in {
-					reason = fmt.Sprintf("first floor null at %.0f Hz, outside the band", c.Value)
+					reason = fmt.Sprintf("first %s null at %.0f Hz, outside the band", ck.floorName(), c.Value)
 					return
 				}
 				hmax := ck.c * d / (4 * hs * band.High)
-				reason = fmt.Sprintf("floor-reflection null at %.0f Hz inside the band (source %s, microphone %s high, %s apart): use a ground-plane microphone, or lower it below about %s to move the first null above %s", fnull, ck.m(hs), ck.m(st.Mic.Z), ck.m(d), ck.m(hmax), units.FormatFrequency(band.High))
+				reason = fmt.Sprintf("%s-reflection null at %.0f Hz inside the band (source %s, microphone %s high, %s apart): use a ground-plane microphone, or lower it below about %s to move the first null above %s", ck.floorName(), fnull, ck.m(hs), ck.m(st.Mic.Z), ck.m(d), ck.m(hmax), units.FormatFrequency(band.High))
 				return
 			})
 		}

@@ -99,6 +99,8 @@ func TestBuildPaperAndScale(t *testing.T) {
 		{name: "negative scale", plan: chamberPlan, opt: sheet.Options{Scale: -50}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "not a standard scale"}},
 		{name: "odd scale", plan: chamberPlan, opt: sheet.Options{Scale: 7}, err: sheet.ErrScale, errSubstr: []string{"1:7", "not a standard scale", "1:75"}},
 		// one family of scales per sheet (review: 1" = 20' on a metric sheet printed "Scale 1:240")
+		// a feet-and-inches sheet's error is in feet and inches (review: the pad at 1/4" = 1'-0" said "199.9 × 150.0 m")
+		{name: "feet-and-inches sheet too large a scale", plan: padDemo, opt: sheet.Options{Scale: 48}, err: sheet.ErrScale, errSubstr: []string{`1/4" = 1'-0"`, `the plan spans 656' 0" × 492' 0"`}}, // the pad's 200 m × 150 m site, about 656 ft × 492 ft
 		{name: "imperial scale on a metric sheet", plan: chamberPlan, opt: sheet.Options{Scale: 240}, err: sheet.ErrScale, errSubstr: []string{`1" = 20'`, "feet-and-inches scale", "metric sheet", "1:50"}},
 		// a feet-and-inches sheet takes the engineer's 1" = 20' (1:240):
 		// the pad's 60 stations need 1:200, which is not one of them

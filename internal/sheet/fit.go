@@ -7,6 +7,7 @@ import (
 	"github.com/paulmach/orb"
 
 	"arcwright/internal/geometry"
+	"arcwright/internal/units"
 )
 
 // planFit is the plan view's scale and the cell-frame rectangle it shows.
@@ -152,8 +153,16 @@ func (b *builder) noFit(what string, asked int, full, roi orb.Bound, aw, ah floa
 	if asked > 0 {
 		verb = "is too large a scale for"
 	}
-	return fmt.Errorf("%w: %s %s %s: the plan spans %.1f × %.1f m, its stations and nozzle alone %.1f × %.1f m; %s",
-		ErrScale, what, verb, paper.Name, full.Max[0]-full.Min[0], full.Max[1]-full.Min[1], w, h, joinOr(out))
+	// sizes in the layout's units: to a tenth of a metre, or in feet and
+	// inches as everywhere on a feet-and-inches sheet
+	size := func(w, h float64) string {
+		if sys == units.Imperial {
+			return units.FormatLength(w, sys) + " × " + units.FormatLength(h, sys)
+		}
+		return fmt.Sprintf("%.1f × %.1f m", w, h)
+	}
+	return fmt.Errorf("%w: %s %s %s: the plan spans %s, its stations and nozzle alone %s; %s",
+		ErrScale, what, verb, paper.Name, size(full.Max[0]-full.Min[0], full.Max[1]-full.Min[1]), size(w, h), joinOr(out))
 }
 
 // planArea returns the plan's drawing area on paper p, mm: the frame less

@@ -36,7 +36,7 @@ func (v *planView) noiseContours() []noiseLabel {
 	}
 	var labels []noiseLabel
 	if m := b.noise; m != nil {
-		at := fmt.Sprintf("point %s, %s above the floor", m.Point, b.pr.length(m.Height))
+		at := fmt.Sprintf("point %s, %s above the %s", m.Point, b.pr.length(m.Height), b.ground())
 		for _, c := range m.Contours {
 			style := StyleNoiseA
 			if c.Peak {

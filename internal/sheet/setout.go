@@ -43,7 +43,7 @@ func (b *builder) setOutTable() tableSpec {
 	u := "(" + pr.lenUnit() + ")"
 	t := tableSpec{
 		name: "setout",
-		title: "SET-OUT TABLE — base (pole or microphone on the floor) from the datum; tapes from the two nearest floor marks to the base; " +
+		title: "SET-OUT TABLE — base (pole or microphone on the " + b.ground() + ") from the datum; tapes from the two nearest " + b.ground() + " marks to the base; " +
 			"boom direction as a bearing from +X, counter-clockwise seen from above; work down the table and tick each box",
 		heads: []string{"Stand", "Base X " + u, "Base Y " + u, "Tape 1 (from mark)", "Tape 2 (from mark)", "Mic height " + u, "Boom", "Aim", "Set", "As built"},
 	}

@@ -27,13 +27,18 @@ func (b *builder) steps() []textLine {
 	c := &b.req.Cell
 	fr := b.req.Exit
 
-	step("Datum and floor marks")
-	say("Mark the datum (0, 0) on the floor. X and Y run as the reference arrows on sheet 1 show; every position below is measured from the datum.")
+	g := b.ground()
+	step("Datum and " + g + " marks")
+	say("Mark the datum (0, 0) on the %s. X and Y run as the reference arrows on sheet 1 show; every position below is measured from the datum.", g)
 	if len(c.Marks) == 0 {
-		say("No floor marks are given: check the datum against the cell drawing before marking anything.")
+		say("No %s marks are given: check the datum against the cell drawing before marking anything.", g)
 	}
 	for _, m := range c.Marks {
-		say("Check mark %s: X %s, Y %s, %s from the datum by tape.", m.Name, pr.length(m.At[0]), pr.length(m.At[1]), pr.length(math.Hypot(m.At[0], m.At[1])))
+		if d := math.Hypot(m.At[0], m.At[1]); !atMark(d) {
+			say("Check mark %s: X %s, Y %s, %s from the datum by tape.", m.Name, pr.length(m.At[0]), pr.length(m.At[1]), pr.length(d))
+		} else {
+			say("Mark %s is at the datum.", m.Name)
+		}
 	}
 
 	step("Nozzle exit and jet axis")
@@ -43,10 +48,10 @@ func (b *builder) steps() []textLine {
 		far = 20 * units.Foot
 	}
 	p5 := fr.ToCell(geometry.JetPoint{X: far})
-	say("The nozzle exit centre is above the floor point X %s, Y %s, at %s above the floor. The jet axis is horizontal, heading %s from +X (counter-clockwise seen from above).",
-		pr.length(fr.Exit.X), pr.length(fr.Exit.Y), pr.length(fr.Exit.Z), degSign(fr.Heading))
+	say("The nozzle exit centre is above the %s point X %s, Y %s, at %s above the %s. The jet axis is horizontal, heading %s from +X (counter-clockwise seen from above).",
+		g, pr.length(fr.Exit.X), pr.length(fr.Exit.Y), pr.length(fr.Exit.Z), g, degSign(fr.Heading))
 	say("%s from the point under the exit to X %s, Y %s (%s downstream); check it by plumb from the nozzle centre.",
-		b.markLine("Mark the axis on the floor"), pr.length(p5.X), pr.length(p5.Y), pr.length(far))
+		b.markLine("Mark the axis on the "+g), pr.length(p5.X), pr.length(p5.Y), pr.length(far))
 
 	for i := range b.plan.Arrays {
 		ar := &b.plan.Arrays[i]
@@ -54,7 +59,7 @@ func (b *builder) steps() []textLine {
 		if len(ss) == 0 {
 			continue
 		}
-		stand := "microphones flush on the floor"
+		stand := "microphones flush on the " + g
 		if ss[0].Stand != nil {
 			stand = "stand " + ss[0].Stand.Name
 		}
@@ -69,8 +74,8 @@ func (b *builder) steps() []textLine {
 				pr.length(ar.Spec.Clearance), strings.Join(runs(ss, spacingAlong(ss), pr), "; "))
 		case planner.Ring:
 			xr := r3.Dot(r3.Sub(ar.Centre, fr.Exit), fr.Axis())
-			say("The ring is centred on the jet axis %s downstream of the exit (floor point X %s, Y %s), radius %s about the axis. Set each station at its azimuth and height:",
-				pr.length(xr), pr.length(ar.Centre.X), pr.length(ar.Centre.Y), pr.length(ar.Radius))
+			say("The ring is centred on the jet axis %s downstream of the exit (%s point X %s, Y %s), radius %s about the axis. Set each station at its azimuth and height:",
+				pr.length(xr), g, pr.length(ar.Centre.X), pr.length(ar.Centre.Y), pr.length(ar.Radius))
 			for _, s := range ss {
 				say("%s: azimuth %s, X %s, Y %s, height %s.", s.ID, degSign(s.Jet.Azimuth), pr.length(s.Mic.X), pr.length(s.Mic.Y), pr.length(s.Height))
 			}
@@ -86,7 +91,7 @@ func (b *builder) steps() []textLine {
 	}
 
 	step("Cables")
-	say("Route every cable along the floor outside the zones and their margins (dotted on the plan); cross the jet axis only upstream of the nozzle exit. Tape cables down and secure stands against the flow.")
+	say("Route every cable along the %s outside the zones and their margins (dotted on the plan); cross the jet axis only upstream of the nozzle exit. Tape cables down and secure stands against the flow.", g)
 
 	step("Checks before every run")
 	say("Re-measure the clearance of every stand near a zone or wall against the station table.")
@@ -101,7 +106,11 @@ func (b *builder) arcSteps(ar *planner.ArrayResult, ss []*planner.Station, say f
 	pr := b.pr
 	fr := b.req.Exit
 	xc := r3.Dot(r3.Sub(ar.Centre, fr.Exit), fr.Axis())
-	say("Mark the centre on the jet axis, %s downstream of the exit: X %s, Y %s from the datum.", pr.length(xc), pr.length(ar.Centre.X), pr.length(ar.Centre.Y))
+	if atMark(xc) {
+		say("Mark the centre on the jet axis below the nozzle exit: X %s, Y %s from the datum.", pr.length(ar.Centre.X), pr.length(ar.Centre.Y))
+	} else {
+		say("Mark the centre on the jet axis, %s downstream of the exit: X %s, Y %s from the datum.", pr.length(xc), pr.length(ar.Centre.X), pr.length(ar.Centre.Y))
+	}
 	if flat(ss) {
 		say("Swing radius %s from the centre with a tape held level (the arc is in plan).", pr.length(ar.Radius))
 	} else {
@@ -131,7 +140,7 @@ func (b *builder) lineSteps(ar *planner.ArrayResult, ss []*planner.Station, say 
 		side = "right"
 	}
 	say("%s parallel to the jet axis, %s to the %s of the axis (looking downstream), from X %s, Y %s to X %s, Y %s.",
-		b.markLine("Mark a line on the floor"), pr.length(ar.Radius), side, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(last.Mic.X), pr.length(last.Mic.Y))
+		b.markLine("Mark a line on the "+b.ground()), pr.length(ar.Radius), side, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(last.Mic.X), pr.length(last.Mic.Y))
 	say("Mark %s at X %s, Y %s (%s downstream of the exit plane), then along the line: %s.",
 		first.ID, pr.length(first.Mic.X), pr.length(first.Mic.Y), pr.length(first.Jet.X), strings.Join(runs(ss, spacingAlong(ss), pr), "; "))
 	b.heightSteps(ss, say)
@@ -146,7 +155,7 @@ func (b *builder) heightSteps(ss []*planner.Station, say func(string, ...any)) {
 		flush = flush && s.Stand == nil && s.Height < 0.005
 	}
 	if flush {
-		say("The microphones lie flush on the floor: no heights to set.")
+		say("The microphones lie flush on the %s: no heights to set.", b.ground())
 		return
 	}
 	hs := make([]float64, len(ss))
@@ -155,10 +164,10 @@ func (b *builder) heightSteps(ss []*planner.Station, say func(string, ...any)) {
 	}
 	r := runs(ss, hs, pr)
 	if len(r) == 1 {
-		say("Set the microphone heights with a laser level from the floor: %s.", strings.TrimSuffix(strings.SplitN(r[0], ": ", 2)[1], " each step"))
+		say("Set the microphone heights with a laser level from the %s: %s.", b.ground(), strings.TrimSuffix(strings.SplitN(r[0], ": ", 2)[1], " each step"))
 		return
 	}
-	say("Set the microphone heights with a laser level from the floor: %s.", strings.ReplaceAll(strings.Join(r, "; "), " each step", " each"))
+	say("Set the microphone heights with a laser level from the %s: %s.", b.ground(), strings.ReplaceAll(strings.Join(r, "; "), " each step", " each"))
 }
 
 // standSteps tells where the bases of boom stands go.
@@ -210,7 +219,7 @@ func (b *builder) aimSteps(ss []*planner.Station, say func(string, ...any)) {
 		case probe:
 			say("Set %s as its own procedure says: the plan checks its clearance, not its aim.", who)
 		case flush:
-			say("Lay %s flat on the floor, diaphragm up, so that the source at %s is at grazing incidence; turn its cable away from the jet.", who, where)
+			say("Lay %s flat on the %s, diaphragm up, so that the source at %s is at grazing incidence; turn its cable away from the jet.", who, b.ground(), where)
 		case g.inc == planner.GrazingIncidence:
 			say("Aim %s with its diaphragm edge-on to the aim point %s (grazing incidence).", who, where)
 		default:
@@ -231,12 +240,25 @@ func (b *builder) statusSteps(ss []*planner.Station, say func(string, ...any)) {
 		}
 	}
 	if len(bl) > 0 {
-		say("Do NOT set %s: blocked (reasons in the station table). Mark the floor points only if the chord chain needs them.", joinAnd(bl))
+		say("Do NOT set %s: blocked (reasons in the station table). Mark the %s points only if the chord chain needs them.", joinAnd(bl), b.ground())
 	}
 	if len(wa) > 0 {
 		say("Check with the test engineer before setting %s: warning (see the table).", joinAnd(wa))
 	}
 }
+
+// ground names what the stations stand on: "ground" on an outdoor pad,
+// "floor" in a cell.
+func (b *builder) ground() string {
+	if b.req.Cell.Kind == geometry.OutdoorPad {
+		return "ground"
+	}
+	return "floor"
+}
+
+// atMark reports whether a distance d (m) between two marks is nil as a
+// tape reads it (below 1/16 in, 1.6 mm): the marks are one.
+func atMark(d float64) bool { return math.Abs(d) < units.Inch/16 }
 
 // markLine returns the words for marking a line on the floor: chalk on a
 // hard floor or the ground, tape or a string line on a treated (grating or

@@ -34,7 +34,7 @@ func TestSetUpSteps(t *testing.T) {
 		// arc B: R = 1.2 m, 10° steps: 2·1.2·sin(5°) = 0.2092 m (hand-computed)
 		"B-01 -> B-04: 0.209 m each step",
 		// the centre of arc A is the nozzle exit, (0.5, 0)
-		"Mark the centre on the jet axis, 0.000 m downstream of the exit: X 0.500 m, Y 0.000 m from the datum.",
+		"Mark the centre on the jet axis below the nozzle exit: X 0.500 m, Y 0.000 m from the datum.", // not "0.000 m downstream" (review)
 		"Swing radius 3.500 m from the centre",
 		// line L: 2.5 m to the right, stations every 1 m from x = 1 m
 		"parallel to the jet axis, 2.500 m to the right of the axis",
@@ -118,9 +118,9 @@ func TestSetUpWording(t *testing.T) {
 		{"treated floor", chamber,
 			[]string{"Mark the axis on the floor (tape on the grating, or a string line", "Set CAM-01 as its own procedure says"},
 			[]string{"chalk", "Point each", "Point CAM"}},
-		{"hard floor, feet and inches", pad,
-			// 20 ft downstream, not a metric 5 m in feet
-			[]string{"Mark the axis on the floor (a chalk line)", `(20' 0" downstream)`, "lie flush on the floor: no heights to set", "Lay each microphone flat on the floor"},
+		{"outdoor pad, feet and inches", pad,
+			// 20 ft downstream, not a metric 5 m in feet; ground, not floor, outdoors
+			[]string{"Mark the axis on the ground (a chalk line)", `(20' 0" downstream)`, "lie flush on the ground: no heights to set", "Lay each microphone flat on the ground"},
 			[]string{"16' 4", " in.", "/16", "laser level from the floor: 0\""}},
 	}
 	for _, tt := range tests {

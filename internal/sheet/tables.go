@@ -17,7 +17,7 @@ func (b *builder) stationTable() tableSpec {
 	u := "(" + pr.lenUnit() + ")"
 	t := tableSpec{
 		name: "stations",
-		title: "STATION TABLE — X and Y from the datum, heights above the floor, lengths in " + pr.lenUnit() +
+		title: "STATION TABLE — X and Y from the datum, heights above the " + b.ground() + ", lengths in " + pr.lenUnit() +
 			"; radius and polar angle nominal (as the layout asks) and as placed, the same quantity: arcs in the arc's plane, as marked; rings about the axis; lines, offset from the axis; near-field, clearance from the plume edge (CSV, JSON: acoustic_distance)" +
 			"; clearances are the smallest over all operating points, each with the point that governs it; " + pr.convention(),
 		heads: []string{"ID", "Ch", "Array", "Polar nominal (deg)", "Polar as placed (deg)", "Radius nominal " + u, "Radius as placed " + u,

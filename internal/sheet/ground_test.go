@@ -1,0 +1,55 @@
+package sheet_test
+
+import (
+	"regexp"
+	"strings"
+	"testing"
+
+	"arcwright/internal/planner"
+	"arcwright/internal/sheet"
+)
+
+// TestOutdoorSaysGround: on the outdoor pad the set-up steps, the set-out
+// and station tables, the noise notes and the planner's reasons say
+// "ground", not "floor", and a mark at the datum is said to be there, not
+// checked "0" from the datum by tape" (review of the pad sheet).
+func TestOutdoorSaysGround(t *testing.T) {
+	p := demoPlan(t, "../../layouts/outdoor-static-pad.yaml")
+	m := build(t, p, sheet.Options{})
+	floor := regexp.MustCompile(`(?i)\bfloors?\b`)
+	// the elevation's own labels and caption
+	// (elevation.go, build.go), the legend's "floor mark" (legend.go), the
+	// nozzle's label (labels.go) and the document's name, which this test
+	// leaves to their own tests
+	exempt := []string{"ELEVATION —", "nozzle axis", "ceiling", "floor straight below", "floor mark", "above floor", "floor layout sheet"}
+	var all []string
+	all = append(all, modelStrings(m)...)
+	for _, s := range p.Stations {
+		all = append(all, s.Reasons...)
+		for _, c := range s.Checks {
+			all = append(all, c.Reason)
+		}
+	}
+	saidDatum := false
+next:
+	for _, s := range all {
+		for _, e := range exempt {
+			if strings.Contains(s, e) {
+				continue next
+			}
+		}
+		if floor.MatchString(s) && s != "floor" { // the elevation's band label (elevation.go)
+			t.Errorf("an outdoor sheet says %q: want \"ground\"", s)
+		}
+		if strings.Contains(s, `, 0" from the datum`) || strings.Contains(s, `, 0" downstream`) {
+			t.Errorf("%q: a mark at the datum is checked by a tape of 0\"", s)
+		}
+		saidDatum = saidDatum || strings.Contains(s, "P1 is at the datum")
+	}
+	if !saidDatum {
+		t.Error(`no step says "P1 is at the datum"`)
+	}
+}
+
+// padDemo plans the outdoor pad demo (feet and inches).
+func padDemo(t testing.TB) *planner.Plan { return demoPlan(t, "../../layouts/outdoor-static-pad.yaml") }
