@@ -216,7 +216,7 @@ func nearestOnSegment(p, a, b orb.Point) orb.Point {
 }
 
 // pointNames names operating points in the plan's order: "P-150, P-185",
-// or "all 14 points" when they are all of more than three.
+// or "all 14 points" when they are all of more than six.
 func (b *builder) pointNames(names []string) string {
 	set := map[string]bool{}
 	for _, n := range names {
@@ -235,7 +235,7 @@ func (b *builder) pointNames(names []string) string {
 			delete(set, n)
 		}
 	}
-	if len(ordered) > 3 && len(ordered) == len(b.plan.Points) {
+	if len(ordered) > 6 && len(ordered) == len(b.plan.Points) {
 		return "all " + plural(len(ordered), "point")
 	}
 	return strings.Join(ordered, ", ")

@@ -74,8 +74,9 @@ type columnPlan struct {
 
 // planColumn chooses, for a column of width w and height h (mm), the
 // largest type for the safety content and what else goes on sheet 1:
-// the safety panel and every safety warning always; then the legend, the
-// notes and the other warnings, in that order, when there is room; what
+// the safety panel and every safety warning always; then the legend (in
+// type down to minSafetySize before it moves), the notes and the other
+// warnings (which move before the type shrinks), when there is room; what
 // does not fit moves to a later sheet with a pointer. ok is false when the
 // safety content does not fit even in minSafetySize.
 func (b *builder) planColumn(w, h float64, lines []warnLine, notes []string) (columnPlan, bool) {
@@ -92,39 +93,41 @@ func (b *builder) planColumn(w, h float64, lines []warnLine, notes []string) (co
 	legendH := b.legend(&Page{}, scratch)
 	notesH := b.notesPanel(&Page{}, scratch, notes)
 	defer func(s float64) { b.safetySize = s }(b.safetySize)
-	for _, s := range safetySizes {
-		b.safetySize = s
-		cautH := b.cautions(&Page{}, scratch)
-		for _, o := range []struct{ legend, others, notes bool }{
-			{true, true, true}, {true, false, true}, {true, true, false}, {true, false, false}, {false, false, false},
-		} {
-			cp := columnPlan{size: s, notes: o.notes, legend: o.legend, shown: safe}
-			if o.others {
-				cp.shown = all
-			}
-			if !o.legend {
-				cp.pointer = append(cp.pointer, "Legend of the plan: "+laterMark+".")
-			}
-			if !o.notes {
-				cp.pointer = append(cp.pointer, "Notes on the plan: "+laterMark+".")
-			}
-			if n := len(all) - len(safe); !o.others && n > 0 {
-				cp.pointer = append(cp.pointer, fmt.Sprintf("%s (not about safety), and every warning in full: %s.", plural(n, "other warning"), laterMark))
-			} else if !verbatim {
-				cp.pointer = append(cp.pointer, "Every warning in full: "+laterMark+".")
-			}
-			need := cautH
-			if o.legend {
-				need += gapMM + legendH
-			}
-			if len(cp.shown)+len(cp.pointer) > 0 {
-				need += gapMM + b.warningsPanel(&Page{}, scratch, cp.shown, cp.pointer)
-			}
-			if o.notes {
-				need += gapMM + notesH
-			}
-			if need <= h {
-				return cp, true
+	// the legend stays on sheet 1 in smaller type rather than move; the
+	// notes and the other warnings move before the type shrinks
+	for _, legend := range []bool{true, false} {
+		for _, s := range safetySizes {
+			b.safetySize = s
+			cautH := b.cautions(&Page{}, scratch)
+			for _, o := range []struct{ others, notes bool }{{true, true}, {false, true}, {true, false}, {false, false}} {
+				cp := columnPlan{size: s, notes: o.notes, legend: legend, shown: safe}
+				if o.others {
+					cp.shown = all
+				}
+				if !legend {
+					cp.pointer = append(cp.pointer, "Legend of the plan: "+laterMark+".")
+				}
+				if !o.notes {
+					cp.pointer = append(cp.pointer, "Notes on the plan: "+laterMark+".")
+				}
+				if n := len(all) - len(safe); !o.others && n > 0 {
+					cp.pointer = append(cp.pointer, fmt.Sprintf("%s (not about safety), and every warning in full: %s.", plural(n, "other warning"), laterMark))
+				} else if !verbatim {
+					cp.pointer = append(cp.pointer, "Every warning in full: "+laterMark+".")
+				}
+				need := cautH
+				if legend {
+					need += gapMM + legendH
+				}
+				if len(cp.shown)+len(cp.pointer) > 0 {
+					need += gapMM + b.warningsPanel(&Page{}, scratch, cp.shown, cp.pointer)
+				}
+				if o.notes {
+					need += gapMM + notesH
+				}
+				if need <= h {
+					return cp, true
+				}
 			}
 		}
 	}
