@@ -6,6 +6,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"arcwright/internal/sheet"
 )
 
 // TestPlanRefusesPaperWithoutRoomForSafety: a sheet 1 that would leave out
@@ -44,5 +46,45 @@ func TestPlanRefusesPaperWithoutRoomForSafety(t *testing.T) {
 	}
 	if _, err := os.Stat(pdf); err == nil {
 		t.Error("a PDF was written")
+	}
+}
+
+// TestLargeSiteSafetyOnSheetOne: the large site's 29 safety warnings (one
+// point striking 24 obstacles and more) were pushed off sheet 1 by its
+// notes; now every one is on sheet 1, the notes moving on (review of the
+// sheet, item 1).
+func TestLargeSiteSafetyOnSheetOne(t *testing.T) {
+	p, err := loadPlan(filepath.Join("testdata", "large-site.yaml"), "", "")
+	if err != nil {
+		t.Fatal(err)
+	}
+	m, err := sheet.Build(p, sheet.Options{Scale: 5000})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var words []string
+	for _, tx := range m.Pages[0].Texts {
+		words = append(words, tx.Text)
+	}
+	page := strings.Join(strings.Fields(strings.Join(words, " ")), " ")
+	on := map[int]bool{}
+	for _, l := range m.Warnings {
+		if strings.Contains(page, strings.Join(strings.Fields(l.Text), " ")) {
+			for _, i := range l.Warnings {
+				on[i] = true
+			}
+		}
+	}
+	n := 0
+	for i, w := range p.Warnings {
+		if strings.Contains(w, "wall jet") || strings.Contains(w, "buoyant") || strings.HasPrefix(w, "crew position") || strings.Contains(w, "collector capture") {
+			n++
+			if !on[i] {
+				t.Errorf("not on sheet 1: %q", w)
+			}
+		}
+	}
+	if n < 20 {
+		t.Errorf("got %d safety warnings, want the site's 29 or so", n)
 	}
 }
