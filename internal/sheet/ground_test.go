@@ -53,3 +53,32 @@ next:
 
 // padDemo plans the outdoor pad demo (feet and inches).
 func padDemo(t testing.TB) *planner.Plan { return demoPlan(t, "../../layouts/outdoor-static-pad.yaml") }
+
+// TestEveryStandHasAFix: on the demos and the reviewer's hard-walled room
+// every row of the set-out table has two fixes, or stands on a mark
+// (review: tape 2 was "-" with no reason for the pad's G-13 and G-14 and
+// the room's A-02).
+func TestEveryStandHasAFix(t *testing.T) {
+	for _, path := range []string{"../../layouts/anechoic-model-jet.yaml", "../../layouts/outdoor-static-pad.yaml",
+		"../../layouts/hard-wall-exhaust-room.yaml", "testdata/review-hard-wall.yaml"} {
+		m := build(t, demoPlan(t, path), sheet.Options{Paper: "A1"})
+		rows := 0
+		for _, pg := range m.Pages {
+			for _, tb := range pg.Tables {
+				if tb.Name != "setout" {
+					continue
+				}
+				for _, r := range tb.Rows {
+					rows++
+					t1, t2 := strings.Join(r.Cells[3], " "), strings.Join(r.Cells[4], " ")
+					if t1 == "-" || t2 == "-" {
+						t.Errorf("%s %s: tapes %q, %q: want a fix", path, strings.Join(r.Cells[0], " "), t1, t2)
+					}
+				}
+			}
+		}
+		if rows == 0 {
+			t.Errorf("%s: no set-out rows", path)
+		}
+	}
+}

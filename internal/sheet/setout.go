@@ -43,7 +43,7 @@ func (b *builder) setOutTable() tableSpec {
 	u := "(" + pr.lenUnit() + ")"
 	t := tableSpec{
 		name: "setout",
-		title: "SET-OUT TABLE — base (pole or microphone on the " + b.ground() + ") from the datum; tapes from the two nearest " + b.ground() + " marks to the base; " +
+		title: "SET-OUT TABLE — base (pole or microphone on the " + b.ground() + ") from the datum; two tapes from the nearest " + b.ground() + " marks that cross at 30° or more (shallower tapes fix a point poorly), else a tape and a square offset: walk from the mark along the line to the other mark (toward or away from it), then square off left or right (or set X and Y by total station); " +
 			"boom direction as a bearing from +X, counter-clockwise seen from above; work down the table and tick each box",
 		heads: []string{"Stand", "Base X " + u, "Base Y " + u, "Tape 1 (from mark)", "Tape 2 (from mark)", "Mic height " + u, "Boom", "Aim", "Set", "As built"},
 	}
@@ -57,10 +57,7 @@ func (b *builder) setOutTable() tableSpec {
 	refs := b.floorRefs()
 	for i := range b.plan.Stations {
 		s := &b.plan.Stations[i]
-		tp := [2]string{"-", "-"}
-		for k, c := range nearestRefs(refs, s.Base) {
-			tp[k] = c.r.name + ": " + pr.cell(c.d)
-		}
+		tp := baseFix(pr, refs, s.Base)
 		boom := "-"
 		if s.Stand != nil && s.Stand.BoomLength > 0 {
 			dx, dy := s.Mic.X-s.Base[0], s.Mic.Y-s.Base[1]
@@ -84,34 +81,80 @@ type refDist struct {
 	d float64
 }
 
-// nearestRefs returns the two floor references nearest to p, nearest
-// first; one whose direction from p is within 10° of the first's (or
-// opposite it) is passed over, since two tapes along one line fix no
-// position.
-func nearestRefs(refs []floorRef, p orb.Point) []refDist {
+// minCrossing is the least angle at which two tapes may cross to fix a
+// point: two tapes meeting at a shallow angle fix it poorly along their
+// bisector (common practice for trilateration: 30° to 150°).
+const minCrossing = 30 * math.Pi / 180
+
+// baseFix returns the two fixes of the base at p for the set-out table: two
+// tapes from marks that cross at minCrossing or more, the shortest such
+// pair ("A: 5.000", "C: 8.000"); where no pair of marks does, a tape from
+// the nearest and a square offset from the line through it and the mark
+// farthest from it ("P1 away from E0: 10.000, offset 0.500 left": walk
+// from P1 along the line, away from E0, then square off to the left); with
+// one mark alone, its tape and
+// the base's X and Y from the datum. A base on a mark is "at mark A", "on
+// the mark: no tape".
+func baseFix(pr printer, refs []floorRef, p orb.Point) [2]string {
 	cs := make([]refDist, len(refs))
 	for i, r := range refs {
 		cs[i] = refDist{r, math.Hypot(r.at[0]-p[0], r.at[1]-p[1])}
 	}
 	sort.SliceStable(cs, func(i, j int) bool { return cs[i].d < cs[j].d })
-	var out []refDist
-	for _, c := range cs {
-		if len(out) == 1 {
-			a := out[0]
-			if a.d > 0 && c.d > 0 {
-				ux, uy := a.r.at[0]-p[0], a.r.at[1]-p[1]
-				vx, vy := c.r.at[0]-p[0], c.r.at[1]-p[1]
-				if math.Abs(ux*vy-uy*vx)/(a.d*c.d) < math.Sin(10*math.Pi/180) {
-					continue
-				}
+	if len(cs) == 0 {
+		return [2]string{"-", "square offset: X and Y from the datum"}
+	}
+	if atMark(cs[0].d) {
+		return [2]string{"at mark " + cs[0].r.name, "on the mark: no tape"}
+	}
+	tape := func(c refDist) string { return c.r.name + ": " + pr.cell(c.d) }
+	best, bi, bj := math.Inf(1), -1, -1
+	for i := range cs {
+		for j := i + 1; j < len(cs); j++ {
+			a, c := cs[i], cs[j]
+			if atMark(c.d) {
+				continue
+			}
+			ux, uy := a.r.at[0]-p[0], a.r.at[1]-p[1]
+			vx, vy := c.r.at[0]-p[0], c.r.at[1]-p[1]
+			if math.Abs(ux*vy-uy*vx)/(a.d*c.d) < math.Sin(minCrossing) {
+				continue // within 30° of one line
+			}
+			if c.d < best {
+				best, bi, bj = c.d, i, j // the pair whose longer tape is shortest
 			}
 		}
-		out = append(out, c)
-		if len(out) == 2 {
-			break
+	}
+	if bi >= 0 {
+		return [2]string{tape(cs[bi]), tape(cs[bj])}
+	}
+	if len(cs) == 1 {
+		return [2]string{tape(cs[0]), "square offset: X and Y from the datum"}
+	}
+	// a square offset from the line through the nearest mark and the
+	// farthest from it among the others, for a long base line
+	a := cs[0]
+	far := cs[1]
+	for _, c := range cs[1:] {
+		if math.Hypot(c.r.at[0]-a.r.at[0], c.r.at[1]-a.r.at[1]) > math.Hypot(far.r.at[0]-a.r.at[0], far.r.at[1]-a.r.at[1]) {
+			far = c
 		}
 	}
-	return out
+	// walk from the nearest mark along the line, toward the other mark or
+	// away from it, then square off to the left or right
+	l := math.Hypot(far.r.at[0]-a.r.at[0], far.r.at[1]-a.r.at[1])
+	ux, uy := (far.r.at[0]-a.r.at[0])/l, (far.r.at[1]-a.r.at[1])/l
+	dx, dy := p[0]-a.r.at[0], p[1]-a.r.at[1]
+	way := "toward"
+	if dx*ux+dy*uy < 0 {
+		way, ux, uy = "away from", -ux, -uy
+	}
+	along, off := dx*ux+dy*uy, ux*dy-uy*dx
+	side := "left"
+	if off < 0 {
+		side = "right"
+	}
+	return [2]string{tape(a), fmt.Sprintf("%s %s %s: %s, offset %s %s", a.r.name, way, far.r.name, pr.cell(along), pr.cell(math.Abs(off)), side)}
 }
 
 // aimWords says in a few words how station s is aimed.
