@@ -4,6 +4,7 @@ import (
 	"fmt"
 	"math"
 	"sort"
+	"strings"
 
 	"github.com/paulmach/orb"
 
@@ -169,7 +170,7 @@ func (v *planView) findDetails() []detail {
 // detailView draws detail d in the frame r: the plan's drawing at the
 // detail's scale, with every station inside the frame labelled by its ID
 // where there is room, and the angles of its arcs.
-func (b *builder) detailView(d detail, r Rect) (*planView, []Label) {
+func (b *builder) detailView(d detail, r Rect) (*planView, []Label, []*planner.Station) {
 	inner := r.inset(viewPad)
 	cx, cy := (d.ext.Min[0]+d.ext.Max[0])/2, (d.ext.Min[1]+d.ext.Max[1])/2
 	v := &planView{
@@ -210,17 +211,53 @@ func (b *builder) detailView(d detail, r Rect) (*planView, []Label) {
 	v.floorMarks()
 	v.pl.hatchFrom(v.shapes)
 	in := r.inset(1)
+	var shown []*planner.Station
 	for _, s := range here {
 		p := v.pos[s]
 		if p.X < in.X || p.X > in.Right() || p.Y < in.Y || p.Y > in.Bottom() {
 			continue
 		}
+		shown = append(shown, s)
 		v.placeText(s.ID, StationLabel, s.ID, sizeID, p, v.labelDir(s), v.markR+0.2, idFar)
 	}
 	for _, c := range v.angles {
 		v.placeText(c.text, c.kind, c.of, sizeSmall, c.anchor, c.dir, c.clear, nil)
 	}
-	return v, v.labels
+	return v, v.labels, shown
+}
+
+// shownRuns names the stations a detail shows, in plan order, neighbours
+// of one array as a run: "A-01 to, R-08"; runs past what
+// fits in w mm at the title's size are summed up as "and 4 more".
+func (b *builder) shownRuns(ss []*planner.Station, w float64, lead string) string {
+	var runs []string
+	for i := 0; i < len(ss); {
+		j := i + 1
+		for j < len(ss) && ss[j].Array == ss[i].Array && ss[j].Index == ss[j-1].Index+1 {
+			j++
+		}
+		switch j - i {
+		case 1:
+			runs = append(runs, ss[i].ID)
+		case 2:
+			runs = append(runs, ss[i].ID, ss[i+1].ID)
+		default:
+			runs = append(runs, ss[i].ID+" to "+ss[j-1].ID)
+		}
+		i = j
+	}
+	out := strings.Join(runs, ", ")
+	for k := len(runs) - 1; k > 0 && b.m.width(clean(lead+out), sizeBody, true) > w; k-- {
+		n := 0
+		for _, r := range runs[k:] {
+			n++
+			if strings.Contains(r, " to ") {
+				n++ // at least two stations
+			}
+		}
+		out = strings.Join(runs[:k], ", ") + fmt.Sprintf(" and %d more", n)
+	}
+	return out
 }
 
 // details lays out the detail views on the flow's sheets, side by side
@@ -246,9 +283,15 @@ func (f *flow) details(ds []detail) {
 			f.newPage()
 			x, rowH = f.area.X, 0
 		}
+		// the title names the stations the detail shows, which may be more
+		// than the run it was drawn for
+		v, labels, shown := b.detailView(d, Rect{x, f.y + titleH, w, h})
+		what := d.array
+		if len(shown) > 0 {
+			what = b.shownRuns(shown, math.Max(w, detailMaxW), "DETAIL "+d.letter+" — ")
+		}
 		f.page.Texts = append(f.page.Texts, Text{X: x, Y: f.y + capHeight(sizeBody) + 0.3, Size: sizeBody, Bold: true,
-			Text: clean(fmt.Sprintf("DETAIL %s — %s, scale %s", d.letter, d.array, ScaleName(d.scale, b.req.Units)))})
-		v, labels := b.detailView(d, Rect{x, f.y + titleH, w, h})
+			Text: clean(fmt.Sprintf("DETAIL %s — %s, scale %s", d.letter, what, ScaleName(d.scale, b.req.Units)))})
 		f.page.Views = append(f.page.Views, View{Name: v.viewName(), Frame: v.frame, Scale: d.scale, Shapes: cropShapes(v.shapes, v.frame)})
 		f.page.Labels = append(f.page.Labels, labels...)
 		x += w + 4
