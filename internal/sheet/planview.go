@@ -119,6 +119,7 @@ func (b *builder) planPage(asked int, field string) error {
 	v.hazardMarks()
 	v.pl.hatchFrom(v.shapes)
 	v.placeLabels(z)
+	v.clipFeatureLabels()
 	v.placeNoiseLabels(noise)
 	b.details = v.findDetails()
 
@@ -221,12 +222,68 @@ func (v *planView) cell() {
 		}
 	}
 	for _, k := range c.KeepOuts {
-		v.shapes = append(v.shapes, poly(StyleKeepOut, v.ringPts(orbPts(k.Footprint.Outline(48)))))
+		if pts := v.inFrame(k.Footprint.Outline(48)); pts != nil {
+			v.shapes = append(v.shapes, poly(StyleKeepOut, pts))
+		}
 	}
 	for _, o := range c.Obstacles {
-		pts := v.ringPts(orbPts(o.Footprint.Outline(48)))
-		v.shapes = append(v.shapes, poly(StyleObstacle, pts))
+		if pts := v.inFrame(o.Footprint.Outline(48)); pts != nil {
+			v.shapes = append(v.shapes, poly(StyleObstacle, pts))
+		}
 	}
+}
+
+// inFrame returns the outline r (cell frame, m) on the page cut to the
+// view's frame (a cropped site's obstacles stop at the frame line), nil
+// when none of it is inside.
+func (v *planView) inFrame(r orb.Ring) []Pt {
+	pts := v.ringPts(orbPts(r))
+	if bd := boundOf(pts); v.frame.Contains(bd) {
+		return pts
+	}
+	if pts = clipRing(pts, v.frame); len(pts) < 3 {
+		return nil
+	}
+	return pts
+}
+
+// clipFeatureLabels keeps the names of obstacles and keep-out zones to
+// what the plan shows: a name whose outline is wholly outside the frame is
+// dropped, and one whose centre is outside it has its leader drawn to the
+// middle of the part inside, so that no leader runs past the frame line.
+func (v *planView) clipFeatureLabels() {
+	c := &v.b.req.Cell
+	parts := map[string][]Pt{}
+	for _, o := range c.Obstacles {
+		parts[o.Name] = v.inFrame(o.Footprint.Outline(48))
+	}
+	for _, k := range c.KeepOuts {
+		parts[k.Name] = v.inFrame(k.Footprint.Outline(48))
+	}
+	in := func(q Pt) bool {
+		return q.X >= v.frame.X && q.X <= v.frame.Right() && q.Y >= v.frame.Y && q.Y <= v.frame.Bottom()
+	}
+	out := v.labels[:0]
+	for _, l := range v.labels {
+		pts, named := parts[l.For]
+		if l.Kind == FeatureLabel && named {
+			if pts == nil {
+				continue // not on the plan
+			}
+			if !in(l.Anchor) {
+				var m Pt
+				for _, q := range pts {
+					m = add(m, q)
+				}
+				l.Anchor = mul(m, 1/float64(len(pts)))
+				if len(l.Line) == 2 {
+					l.Line = []Pt{l.Anchor, l.Line[1]}
+				}
+			}
+		}
+		out = append(out, l)
+	}
+	v.labels = out
 }
 
 // breakMarks draws a break mark (a short zigzag across the line) where the
