@@ -43,7 +43,21 @@ func TestImperialOneNotation(t *testing.T) {
 	if r != `147' 8"` { // 45 m = 147.64 ft (hand-computed): to the inch beyond 100 ft
 		t.Fatalf("arc G radius prints %s, want 147' 8\"", r)
 	}
+	// a ground-plane point's microphone height: the set-out table's cell
+	// and the reasons' words print it alike (review: "3 ft 11 in high" in a
+	// reason, 3' 11-1/4" in the table)
+	var h string
+	for _, st := range p.Stations {
+		if st.ID == "E-090" {
+			h = units.FormatLength(st.Height, units.Imperial)
+		}
+	}
+	if h != `3' 11-1/4"` { // 1.2 m = 47.24 in (hand-computed)
+		t.Fatalf("E-090's height prints %s, want 3' 11-1/4\"", h)
+	}
 	for _, c := range []struct{ surface, text, want string }{
+		{"set-out table", sheetText, `3' 11-1/4" -`},
+		{"reasons", sheetText, "microphone " + h + " high"},
 		{"summary", out, "radius " + r},
 		{"plan label", sheetText, "R " + r + " nominal"},
 		{"set-out table", sheetText, "E0: " + r},
