@@ -179,3 +179,71 @@ func TestMarkRadius(t *testing.T) {
 		}
 	}
 }
+
+// TestPlacerCrowd checks the placer's queries against a test of every box
+// and leader in turn where symbols pile up beyond a grid cell's share
+// (cellCap), some added after the first queries, with labels and leaders
+// placed round the pile.
+func TestPlacerCrowd(t *testing.T) {
+	rng := rand.New(rand.NewPCG(17, 19))
+	pl := newPlacer(Rect{0, 0, 120, 80})
+	var all []pitem
+	add := func(n int, spread float64) {
+		for range n {
+			c := Pt{60 + spread*(rng.Float64()-0.5), 40 + spread*(rng.Float64()-0.5)}
+			r := rectAround(c, 0.7)
+			pl.mark(r)
+			all = append(all, pitem{r: r, mark: true})
+		}
+	}
+	add(300, 0.05)
+	add(200, 6)
+	for i := range 400 {
+		if i == 200 {
+			add(100, 2) // more symbols after some labels
+		}
+		a := centre(all[rng.IntN(len(all))].r)
+		s, ok := pl.find(want{w: 5, h: 2.2, anchor: a, clear: 0.9, dir: Pt{1, 0}}, idFar)
+		if !ok {
+			continue
+		}
+		pl.commit(s)
+		all = append(all, pitem{r: s.box, label: true})
+		if s.leader {
+			all = append(all, pitem{a: s.from, b: s.to, seg: true})
+		}
+	}
+	for q := range 3000 {
+		c := Pt{60 + 30*(rng.Float64()-0.5), 40 + 30*(rng.Float64()-0.5)}
+		box := Rect{c.X, c.Y, 1 + 6*rng.Float64(), 1 + 2*rng.Float64()}
+		a := centre(all[rng.IntN(len(all))].r)
+		gap := 5 * rng.Float64()
+		grown := Rect{box.X - labelGap, box.Y - labelGap, box.W + 2*labelGap, box.H + 2*labelGap}
+		free, clear, near := pl.bounds.Contains(box), true, false
+		for _, it := range all {
+			if it.seg {
+				free = free && !segHitsRect(it.a, it.b, grown, 0)
+				continue
+			}
+			free = free && !it.r.Overlaps(grown, 0)
+			if !bndOf(it.r).holdsOpen(a) && segHitsRect(a, c, it.r, leaderGap) {
+				clear = false
+			}
+			if m := centre(it.r); it.mark && !bndOf(it.r).holds(a) && dist(rectEdgePoint(box, m), m) < gap {
+				near = true
+			}
+		}
+		if got := pl.free(box); got != free {
+			t.Fatalf("query %d: free(%v) = %v, want %v", q, box, got, free)
+		}
+		if got := pl.clearPath(a, c); got != clear {
+			t.Fatalf("query %d: clearPath(%v, %v) = %v, want %v", q, a, c, got, clear)
+		}
+		if got := pl.nearerMark(box, a, gap); got != near {
+			t.Fatalf("query %d: nearerMark(%v, %v, %.2f) = %v, want %v", q, box, a, gap, got, near)
+		}
+	}
+	if len(pl.fixed) == 0 {
+		t.Error("no symbol went to the tree: the test does not crowd a cell")
+	}
+}

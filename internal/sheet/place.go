@@ -9,22 +9,23 @@ import (
 const labelGap = 0.3
 
 // placer keeps the boxes already taken in a view (labels, marks, symbols)
-// and the leader lines, and finds a free spot for each new label. The
-// labels and leaders lie in a uniform grid of cells: they never pile up,
-// since a label goes only where it is clear of the others. The fixed
-// boxes (station symbols, marks, the drawn things labels keep off) can
-// pile up by the thousand on one spot of a crowded plan, and lie in a
-// boxTree instead. The fixed boxes are added before the labels near them
-// are placed: the tree is rebuilt when more than pendingMax boxes came
-// after it.
+// and the leader lines, and finds a free spot for each new label. They lie
+// in a uniform grid of cells. Labels and leaders never pile up there,
+// since a label goes only where it is clear of the others; the fixed boxes
+// (station symbols, marks, the drawn things labels keep off) can, by the
+// thousand on one spot of a crowded plan: those that come to a cell that
+// holds cellCap fixed boxes already go to a boxTree instead. The fixed
+// boxes are added before the labels near them are placed: the tree is
+// rebuilt when more than pendingMax boxes came after it.
 type placer struct {
 	bounds Rect    // labels must lie inside
 	cell   float64 // grid cell size, mm
 	grid   map[[2]int][]int
-	items  []pitem // the labels and leaders
+	items  []pitem // the boxes and leaders in the grid
 	seen   []uint32
 	gen    uint32
-	fixed  []pitem // the fixed boxes, in the order added
+	nfixed map[[2]int]int // the number of fixed boxes in each cell
+	fixed  []pitem        // the fixed boxes beyond cellCap, in the order added
 	tree   *boxTree
 	built  int // fixed[:built] are in tree
 	// hatch is the raster of the view's hatched regions, nil when none:
@@ -37,8 +38,11 @@ type placer struct {
 }
 
 // pendingMax is the most fixed boxes the placer tests one by one before
-// it rebuilds its tree.
-const pendingMax = 16
+// it rebuilds its tree; cellCap is the most fixed boxes in a grid cell.
+const (
+	pendingMax = 16
+	cellCap    = 32
+)
 
 // pitem is a taken box or a leader segment.
 type pitem struct {
@@ -50,7 +54,7 @@ type pitem struct {
 }
 
 func newPlacer(bounds Rect) *placer {
-	return &placer{bounds: bounds, cell: 4, grid: make(map[[2]int][]int), tree: &boxTree{}}
+	return &placer{bounds: bounds, cell: 4, grid: make(map[[2]int][]int), nfixed: make(map[[2]int]int), tree: &boxTree{}}
 }
 
 // hatchFrom rasters the hatched regions among shapes (the zones, keep-outs
@@ -70,18 +74,28 @@ func (p *placer) cellRange(r Rect) (int, int, int, int) {
 }
 
 func (p *placer) insert(it pitem, r Rect) {
-	if !it.seg && !it.label {
-		p.fixed = append(p.fixed, it)
-		return
+	x0, y0, x1, y1 := p.cellRange(r)
+	fixed := !it.seg && !it.label
+	if fixed {
+		for gx := x0; gx <= x1; gx++ {
+			for gy := y0; gy <= y1; gy++ {
+				if p.nfixed[[2]int{gx, gy}] >= cellCap {
+					p.fixed = append(p.fixed, it)
+					return
+				}
+			}
+		}
 	}
 	i := len(p.items)
 	p.items = append(p.items, it)
 	p.seen = append(p.seen, 0)
-	x0, y0, x1, y1 := p.cellRange(r)
 	for gx := x0; gx <= x1; gx++ {
 		for gy := y0; gy <= y1; gy++ {
 			k := [2]int{gx, gy}
 			p.grid[k] = append(p.grid[k], i)
+			if fixed {
+				p.nfixed[k]++
+			}
 		}
 	}
 }
@@ -110,7 +124,7 @@ func (p *placer) leader(a, b Pt) {
 	p.insert(pitem{a: a, b: b, seg: true}, boundOf([]Pt{a, b}))
 }
 
-// visit calls f for every label and leader near r once.
+// visit calls f for every item of the grid near r once.
 func (p *placer) visit(r Rect, f func(it *pitem) bool) bool {
 	p.gen++
 	x0, y0, x1, y1 := p.cellRange(r)
@@ -137,26 +151,29 @@ func (p *placer) free(r Rect) bool {
 		return false
 	}
 	grown := Rect{r.X - labelGap, r.Y - labelGap, r.W + 2*labelGap, r.H + 2*labelGap}
+	if !p.visit(grown, func(it *pitem) bool {
+		if it.seg {
+			return !segHitsRect(it.a, it.b, grown, 0)
+		}
+		return !it.r.Overlaps(grown, 0)
+	}) {
+		return false
+	}
 	for _, it := range p.pending() {
 		if it.r.Overlaps(grown, 0) {
 			return false
 		}
 	}
-	if p.tree.overlaps(grown) {
-		return false
-	}
-	return p.visit(grown, func(it *pitem) bool {
-		if it.seg {
-			return !segHitsRect(it.a, it.b, grown, 0)
-		}
-		return !it.r.Overlaps(grown, 0)
-	})
+	return len(p.fixed) == 0 || !p.tree.overlaps(grown)
 }
 
 // boxesOver returns the number of taken boxes (not leaders) that overlap
 // r.
 func (p *placer) boxesOver(r Rect) int {
-	n := p.tree.count(r)
+	n := 0
+	if len(p.fixed) > 0 {
+		n = p.tree.count(r)
+	}
 	for _, it := range p.pending() {
 		if it.r.Overlaps(r, 0) {
 			n++
@@ -178,20 +195,20 @@ const leaderGap = 0.05
 // clearPath reports whether a leader from a to b crosses no taken box but
 // those that hold a (the mark the leader leaves).
 func (p *placer) clearPath(a, b Pt) bool {
+	if !p.visit(boundOf([]Pt{a, b}), func(it *pitem) bool {
+		if it.seg || bndOf(it.r).holdsOpen(a) {
+			return true
+		}
+		return !segHitsRect(a, b, it.r, leaderGap)
+	}) {
+		return false
+	}
 	for _, it := range p.pending() {
 		if !bndOf(it.r).holdsOpen(a) && segHitsRect(a, b, it.r, leaderGap) {
 			return false
 		}
 	}
-	if p.tree.segHits(a, b, leaderGap) {
-		return false
-	}
-	return p.visit(boundOf([]Pt{a, b}), func(it *pitem) bool {
-		if it.seg || bndOf(it.r).holdsOpen(a) {
-			return true
-		}
-		return !segHitsRect(a, b, it.r, leaderGap)
-	})
+	return len(p.fixed) == 0 || !p.tree.segHits(a, b, leaderGap)
 }
 
 // nearerMark reports whether the symbol of a station other than the one
@@ -206,7 +223,19 @@ func (p *placer) nearerMark(r Rect, anchor Pt, gap float64) bool {
 			return true
 		}
 	}
-	return p.tree.markNear(r, anchor, gap)
+	if len(p.fixed) > 0 && p.tree.markNear(r, anchor, gap) {
+		return true
+	}
+	found := false
+	p.visit(Rect{r.X - gap, r.Y - gap, r.W + 2*gap, r.H + 2*gap}, func(it *pitem) bool {
+		if !it.mark || bndOf(it.r).holds(anchor) {
+			return true
+		}
+		c := centre(it.r)
+		found = dist(rectEdgePoint(r, c), c) < gap
+		return !found
+	})
+	return found
 }
 
 // want describes a label to place: its size, the point it labels, the
