@@ -93,9 +93,9 @@
 // The cost per station stays the same however many crowd together: the
 // placed labels and the symbols are found through a grid, and the symbols
 // that crowd a cell of it beyond a few dozen through a tree that answers
-// for a whole pile at once; a label whose anchor lies
-// within 0.1 mm of one that found no spot on a leader does not search
-// again (from the same anchor it would find none either).
+// for a whole pile at once; a label whose anchor lies within 0.1 mm of
+// one that found no spot on a leader does not search again (from the same
+// anchor it would find none either).
 //
 // # Page coordinates
 //
