@@ -417,7 +417,7 @@ func (b *builder) sideViews(f *flow) {
 		title string
 		make  func(x, y, w, maxH float64, sx int) (*sideView, bool)
 	}{
-		{"ELEVATION — vertical section through the jet axis: x downstream of the nozzle exit, heights above the floor; the zones are cut at the floor, the ceiling and the walls", b.elevation},
+		{b.elevationTitle(), b.elevation},
 		{"CLEARANCE VIEW — the jet's meridional half-plane: x downstream of the exit, r the distance from the jet axis; each station at its true x and r, so it is clear of a zone drawn here exactly when its mark is outside the zone's outline. Zones bent by buoyancy or carried along a surface (wall jets) are not bodies of revolution and are not drawn here: a station they block is ringed; see the plan", b.clearance},
 	} {
 		// beside the previous view when that leaves a column of 120 mm,
@@ -484,4 +484,13 @@ func (b *builder) sideViews(f *flow) {
 		rowBottom = math.Max(rowBottom, f.y)
 		f.y = rowBottom
 	}
+}
+
+// elevationTitle is the elevation's heading: heights above the floor (the
+// ground on an outdoor pad), zones cut at the surfaces the cell has.
+func (b *builder) elevationTitle() string {
+	if b.ground() == "ground" {
+		return "ELEVATION — vertical section through the jet axis: x downstream of the nozzle exit, heights above the ground; the zones are cut at the ground"
+	}
+	return "ELEVATION — vertical section through the jet axis: x downstream of the nozzle exit, heights above the floor; the zones are cut at the floor, the ceiling and the walls"
 }

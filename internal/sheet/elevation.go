@@ -425,16 +425,16 @@ func (b *builder) elevation(x, y, w, maxH float64, sx int) (*sideView, bool) {
 	v.nozzle(z0, false)
 	pr := b.pr
 	if ceiling {
-		v.placeText(fmt.Sprintf("ceiling %s above the floor", pr.length(c.Ceiling)), t.pt(0, c.Ceiling), Pt{0, 1}, 0.5, featFar, "ceiling")
+		v.placeText(fmt.Sprintf("ceiling %s above the %s", pr.length(c.Ceiling), b.ground()), t.pt(0, c.Ceiling), Pt{0, 1}, 0.5, featFar, "ceiling")
 	} else {
 		what := "open sky"
 		if finite(c.Ceiling) {
-			what = "ceiling " + pr.length(c.Ceiling) + " above the floor, above this view"
+			what = "ceiling " + pr.length(c.Ceiling) + " above the " + b.ground() + ", above this view"
 		}
 		v.fixedLabel(what, Pt{v.frame.X + viewPad + 2, v.frame.Y + viewPad + 0.5}, "ceiling")
 	}
-	v.placeText("nozzle axis "+pr.length(z0)+" above the floor", t.pt(0, z0), unit(Pt{-1, -1}, Pt{0, -1}), 1.5, featFar, "nozzle")
-	v.placeText("floor", t.pt(u0+(u1-u0)*0.03, 0), Pt{0.3, -1}, 0.3, nil, "floor")
+	v.placeText("nozzle axis "+pr.length(z0)+" above the "+b.ground(), t.pt(0, z0), unit(Pt{-1, -1}, Pt{0, -1}), 1.5, featFar, "nozzle")
+	v.placeText(b.ground(), t.pt(u0+(u1-u0)*0.03, 0), Pt{0.3, -1}, 0.3, nil, "floor")
 	for _, ob := range b.axisObstacles(u0, u1) {
 		v.placeText(ob.name, t.pt((ob.u0+ob.u1)/2, math.Min(ob.z1, top)), Pt{0, -1}, 0.5, featFar, ob.name)
 	}
@@ -500,7 +500,7 @@ func (b *builder) clearance(x, y, w, maxH float64, sx int) (*sideView, bool) {
 			v.placeText(what+" "+pr.length(r)+" from the axis", t.pt(u0+(u1-u0)*0.06, r), Pt{0.2, -1}, 0.4, featFar, what)
 		}
 	}
-	ref(z0, "floor straight below the axis,")
+	ref(z0, b.ground()+" straight below the axis,")
 	if finite(c.Ceiling) {
 		ref(c.Ceiling-z0, "ceiling straight above the axis,")
 	}

@@ -214,7 +214,7 @@ func (v *planView) featureLabels() {
 	fr := b.req.Exit
 	e := v.t.pt(fr.Exit.X, fr.Exit.Y)
 	s, co := math.Sincos(fr.Heading)
-	txt := "nozzle exit: X " + pr.dim(fr.Exit.X) + ", Y " + pr.dim(fr.Exit.Y) + ", axis " + pr.dim(fr.Exit.Z) + " above floor"
+	txt := "nozzle exit: X " + pr.dim(fr.Exit.X) + ", Y " + pr.dim(fr.Exit.Y) + ", axis " + pr.dim(fr.Exit.Z) + " above the " + b.ground()
 	if !v.placeText(txt, FeatureLabel, "nozzle", sizeSmall, e, Pt{-s, -co}, 1.5, []float64{3, 6, 10, 15, 22, 30, 40, 55}) {
 		v.notes = append(v.notes, txt+".")
 	}
@@ -288,7 +288,13 @@ func (v *planView) zoneLabels(z zoneSet) {
 		return
 	}
 	if cell.Bounded() {
-		v.notes = append(v.notes, "The zones are drawn up to the boundary; as free jets they would reach: "+joinAnd(beyond)+" (plus the margin). See the plan's warnings where a zone meets a wall.")
+		then := " See the plan's warnings where a zone meets a wall."
+		if len(v.b.plan.Impingements) == 0 && len(v.b.plan.Attached) == 0 {
+			// the planner finds no wall contact (a collector takes the jet
+			// first): say so rather than point to warnings that are not there
+			then = " By the planner's checks no zone meets a wall, floor or ceiling before it is captured; the checks use the whole zone."
+		}
+		v.notes = append(v.notes, "The zones are drawn up to the boundary; as free jets they would reach: "+joinAnd(beyond)+" (plus the margin)."+then)
 		return
 	}
 	txt := "zones continue beyond the frame: " + joinAnd(beyond)

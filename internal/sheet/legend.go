@@ -61,7 +61,7 @@ func (b *builder) legendEntries() []legendEntry {
 		add(func(r Rect) []Shape {
 			p := Pt{r.X + 2, r.Y + r.H/2}
 			return []Shape{line(StyleTick, Pt{p.X - 1.4, p.Y}, Pt{p.X + 1.4, p.Y}), line(StyleTick, Pt{p.X, p.Y - 1.4}, Pt{p.X, p.Y + 1.4})}
-		}, "floor mark")
+		}, b.ground()+" mark")
 	}
 	if b.hasKind(planner.Arc) {
 		add(func(r Rect) []Shape {
