@@ -61,37 +61,55 @@ func captureX(req *Request, p *PointResult) float64 {
 // obstacles by increasing x and then by their order in the layout.
 // obstacles indexes req.Cell.Solids().
 //
-// The boundary, floor and ceiling are tested on the outline's vertices
-// (the boundary on the horizontal meridian, either side). An obstacle is
-// reached when it comes within a ball about an axis point that holds the
-// zone's slice there: balls of radius R + h (R the largest zone radius
-// within a step h either side) every h along the axis cover the zone, so an
-// obstacle that meets the zone is always reported; one near the zone may be
-// reported too, which only errs towards a warning. Within one zone radius
-// of the exit plane the ball is shrunk to its distance from the exit plane,
-// so that the rig or wall the nozzle is mounted on is not reported as
-// struck.
+// The boundary, floor and ceiling are tested on the outline (the boundary
+// on the horizontal meridian, either side), and the contact is placed where
+// the outline first crosses them: by bisection along the outline segment
+// for the boundary, linearly between vertices for the floor and ceiling. An
+// obstacle may be reached when it comes within a ball about an axis point
+// that holds the zone's slice there: balls of radius R + h (R the largest
+// zone radius within a step h either side) every h along the axis cover the
+// zone. From the first such ball on, firstSlabContact finds the first slab
+// of the zone that meets the obstacle, which is the reported contact; an
+// obstacle near the zone but outside it is not reported. Within one zone
+// radius of the exit plane the ball is shrunk to its distance from the exit
+// plane, so that the rig or wall the nozzle is mounted on is not reported
+// as struck.
 func zoneReaches(req *Request, obstacles *geometry.Index, env *jet.Envelope, capture float64) []contact {
 	cell := &req.Cell
 	f := req.Exit
 	wall, floor, ceiling := math.Inf(1), math.Inf(1), math.Inf(1)
 	var wallAt orb.Point
-	for _, q := range env.Points {
+	outside := func(x, r, az float64) (orb.Point, bool) {
+		c := f.ToCell(geometry.JetPoint{X: x, R: r, Azimuth: az})
+		pt := orb.Point{c.X, c.Y}
+		return pt, !cell.Contains(pt)
+	}
+	for i, q := range env.Points {
 		x, r := q[0], q[1]
 		if x >= capture {
 			break
 		}
 		for _, az := range []float64{0, math.Pi} {
-			c := f.ToCell(geometry.JetPoint{X: x, R: r, Azimuth: az})
-			if cell.Bounded() && x < wall && !cell.Contains(orb.Point{c.X, c.Y}) {
-				wall, wallAt = x, orb.Point{c.X, c.Y}
+			if !cell.Bounded() || x >= wall {
+				continue
+			}
+			if pt, out := outside(x, r, az); out {
+				bx, bat := x, pt
+				if i > 0 {
+					// the outline left the boundary between the vertex
+					// before and this one: bisect for the crossing
+					bx, bat = crossing(env, env.Points[i-1], q, func(x, r float64) (orb.Point, bool) { return outside(x, r, az) })
+				}
+				if bx < wall {
+					wall, wallAt = bx, bat
+				}
 			}
 		}
-		if f.Exit.Z-r < 0 {
-			floor = math.Min(floor, x)
+		if f.Exit.Z-r < 0 && x < floor {
+			floor = levelCrossing(env.Points, i, f.Exit.Z)
 		}
-		if f.Exit.Z+r > cell.Ceiling {
-			ceiling = math.Min(ceiling, x)
+		if f.Exit.Z+r > cell.Ceiling && x < ceiling {
+			ceiling = levelCrossing(env.Points, i, cell.Ceiling-f.Exit.Z)
 		}
 	}
 	var out []contact
@@ -109,6 +127,53 @@ func zoneReaches(req *Request, obstacles *geometry.Index, env *jet.Envelope, cap
 		}
 	}
 	return append(out, obstacleReaches(f, obstacles, env, capture)...)
+}
+
+// crossBisections is the number of halvings of an outline segment when
+// looking for where it leaves the boundary: 2⁻⁴⁰ of the segment.
+const crossBisections = 40
+
+// crossing returns the first point of the outline segment from a (inside)
+// to b (outside), both (x, r) in m, that out reports outside the boundary,
+// found by bisection, with its plan position (cell frame, m). The radius
+// along the segment is the zone's exact radius where the segment runs
+// downstream, the straight segment elsewhere (up the exit plane).
+func crossing(env *jet.Envelope, a, b [2]float64, out func(x, r float64) (orb.Point, bool)) (float64, orb.Point) {
+	at := func(t float64) (float64, float64) {
+		x := a[0] + t*(b[0]-a[0])
+		r := a[1] + t*(b[1]-a[1])
+		if b[0] > a[0] && x > 0 && x < env.Length {
+			r = math.Max(r, env.Radius(x))
+		}
+		return x, r
+	}
+	lo, hi := 0.0, 1.0
+	x, r := at(hi)
+	pt, _ := out(x, r)
+	for range crossBisections {
+		mid := (lo + hi) / 2
+		mx, mr := at(mid)
+		if p, o := out(mx, mr); o {
+			hi, x, pt = mid, mx, p
+		} else {
+			lo = mid
+		}
+	}
+	return x, pt
+}
+
+// levelCrossing returns the axial distance, m, at which the outline pts
+// first reaches radius level, given that vertex i is the first at or beyond
+// it: linear between vertex i−1 and i.
+func levelCrossing(pts [][2]float64, i int, level float64) float64 {
+	if i == 0 {
+		return pts[0][0]
+	}
+	a, b := pts[i-1], pts[i]
+	if b[1] <= a[1] || a[1] >= level {
+		return a[0]
+	}
+	return a[0] + (b[0]-a[0])*(level-a[1])/(b[1]-a[1])
 }
 
 // obstacleReaches returns the obstacles of the index that the zone env
@@ -137,12 +202,101 @@ func obstacleReaches(f geometry.JetFrame, obstacles *geometry.Index, env *jet.En
 				continue
 			}
 			seen[i] = true
-			a := f.ToCell(geometry.JetPoint{X: x})
-			out = append(out, contact{surface: surfaceObstacle, obstacle: i, x: x, at: orb.Point{a.X, a.Y}})
+			// the ball only says the zone may meet the obstacle from x on:
+			// find the first slab of the zone that does
+			s := obstacles.Solid(i)
+			cx, ok := firstSlabContact(f, s, env, math.Max(x, firstContactStep), end)
+			if !ok {
+				continue // near the zone, not in it
+			}
+			a := f.ToCell(geometry.JetPoint{X: cx})
+			out = append(out, contact{surface: surfaceObstacle, obstacle: i, x: cx, at: orb.Point{a.X, a.Y}})
 		}
 		x = next
 	}
 	return out
+}
+
+// firstContactStep is the length, m, of the shortest slab of the zone that
+// firstSlabContact tests: the contact it reports is at most this far
+// upstream of the true one.
+const firstContactStep = 1e-4
+
+// firstSlabContact returns the smallest axial distance x in [a, b] (m, jet
+// frame) at which the zone env meets the prism s, to within
+// firstContactStep upstream, and false when it does not meet it there.
+//
+// The jet axis is horizontal, so the zone between x1 and x2 lies in the
+// horizontal cylinder about the axis of radius Rmax, the zone's largest
+// radius there. A vertical prism meets that cylinder exactly when its
+// height range comes within Rmax of the axis height (dz) and its footprint
+// meets the plan rectangle x1..x2 by ±√(Rmax² − dz²) about the axis
+// (derived). Halving the slabs, first the upstream half, finds the first
+// slab that meets the prism; slabs that do not meet it hold no contact.
+func firstSlabContact(f geometry.JetFrame, s geometry.Solid, env *jet.Envelope, a, b float64) (float64, bool) {
+	var dz float64
+	switch z := f.Exit.Z; {
+	case z < s.ZMin:
+		dz = s.ZMin - z
+	case z > s.ZMax:
+		dz = z - s.ZMax
+	}
+	meets := func(x1, x2 float64) bool {
+		r := slabRadius(env, x1, x2)
+		if dz > r {
+			return false
+		}
+		w := math.Sqrt(r*r - dz*dz)
+		var c [4]orb.Point
+		for k, q := range []geometry.JetPoint{{X: x1, R: w}, {X: x2, R: w}, {X: x2, R: w, Azimuth: math.Pi}, {X: x1, R: w, Azimuth: math.Pi}} {
+			v := f.ToCell(q)
+			c[k] = orb.Point{v.X, v.Y}
+		}
+		for k := range c {
+			if s.Footprint.SegmentDistance(c[k], c[(k+1)%4]) == 0 {
+				return true
+			}
+		}
+		// the footprint wholly inside the rectangle
+		var p orb.Point
+		if s.Footprint.IsCircle() {
+			p = s.Footprint.Center
+		} else {
+			p = s.Footprint.Ring[0]
+		}
+		return geometry.Polygon(orb.Ring{c[0], c[1], c[2], c[3], c[0]}).Contains(p)
+	}
+	var first func(x1, x2 float64) (float64, bool)
+	first = func(x1, x2 float64) (float64, bool) {
+		if !meets(x1, x2) {
+			return 0, false
+		}
+		if x2-x1 <= firstContactStep {
+			return x1, true
+		}
+		m := (x1 + x2) / 2
+		if x, ok := first(x1, m); ok {
+			return x, true
+		}
+		return first(m, x2)
+	}
+	if b <= a {
+		return 0, false
+	}
+	return first(a, b)
+}
+
+// slabRadius returns an upper bound of the radius of the zone env between
+// x1 and x2, m: the largest of the exact radius at both ends, the middle
+// and the outline's vertices between, plus the outline's tolerance.
+func slabRadius(env *jet.Envelope, x1, x2 float64) float64 {
+	r := math.Max(env.Radius(x1), math.Max(env.Radius(x2), env.Radius((x1+x2)/2)))
+	for _, q := range env.Points {
+		if q[0] > x1 && q[0] < x2 {
+			r = math.Max(r, math.Max(q[1], env.Radius(q[0])))
+		}
+	}
+	return r + env.Tolerance
 }
 
 // splash is the region along a struck obstacle's face where the exhaust

@@ -103,3 +103,55 @@ func TestSplashDepth(t *testing.T) {
 		}
 	}
 }
+
+// TestFirstContactX: the reported contact is where the zone first meets a
+// surface, not the centre of a search ball or the next outline vertex
+// (review of the pad demo: the fence at 298 ft was reported at 217–232 ft,
+// the site limit at 396 ft at 402–422 ft). Hand-computed geometry: the
+// plate's upstream face is at cell X = 4, 1 m downstream of the exit at
+// X = 3 (DERIVED from the fixture); a far wall or site limit at cell X = 5
+// is 2 m downstream. The contact is reported no more than 1 mm early.
+func TestFirstContactX(t *testing.T) {
+	for _, tt := range []struct {
+		name    string
+		kind    geometry.Kind
+		surface surface
+		wallX   float64 // far boundary, cell X, m; 0 keeps the fixture's
+		want    float64 // jet-frame x of the surface, m
+	}{
+		{"plate 1 m downstream", geometry.Anechoic, surfaceObstacle, 0, 1},
+		{"wall 2 m downstream", geometry.Anechoic, surfaceBoundary, 5, 2},
+		{"site limit 2 m downstream", geometry.OutdoorPad, surfaceBoundary, 5, 2},
+	} {
+		t.Run(tt.name, func(t *testing.T) {
+			req := plate()
+			req.Cell.Kind = tt.kind
+			if tt.wallX != 0 {
+				req.Cell.Obstacles = req.Cell.Obstacles[:1] // the rig only
+				req.Cell.Boundary = orb.Ring{{0, 0}, {tt.wallX, 0}, {tt.wallX, 9}, {0, 9}, {0, 0}}
+				req.Arrays[0].Fixed = []Fixed{{Name: "p", At: r3.Vec{X: 1, Y: 1, Z: 1.5}}}
+			}
+			p := mustPlan(t, req)
+			ix := geometry.NewIndex(req.Cell.Solids())
+			n := 0
+			for _, pt := range p.Points {
+				env := pt.Velocity()
+				if env.Length <= tt.want+0.05 {
+					continue
+				}
+				for _, c := range zoneReaches(req, ix, env, captureX(req, &pt)) {
+					if c.surface != tt.surface {
+						continue
+					}
+					n++
+					if c.x < tt.want-0.001 || c.x > tt.want+geometry.BoundaryTol+1e-9 {
+						t.Errorf("%s: contact at x = %.4f m, want %.3f m (within 1 mm upstream)", pt.Name, c.x, tt.want)
+					}
+				}
+			}
+			if n == 0 {
+				t.Fatalf("no contact with the surface at all")
+			}
+		})
+	}
+}
