@@ -155,3 +155,45 @@ func TestFirstContactX(t *testing.T) {
 		})
 	}
 }
+
+// TestSiteLimitWording: an outdoor site limit is not a wall (issue 8): the
+// warning for a zone that reaches it says the exhaust runs on beyond it,
+// off the site, and tells who must be kept out, and says nothing of a wall
+// jet or of keeping clear of "that surface"; a wall of a room keeps its
+// wall-jet warning.
+func TestSiteLimitWording(t *testing.T) {
+	for _, tt := range []struct {
+		kind      geometry.Kind
+		want, not []string
+	}{
+		{geometry.OutdoorPad, []string{"reaches the site limit", "runs on beyond", "off the site", "neighbours"}, []string{"wall jet", "that surface"}},
+		{geometry.Anechoic, []string{"reaches the walls", "wall jet"}, []string{"site limit", "runs on beyond"}},
+	} {
+		req := plate()
+		req.Cell.Kind = tt.kind
+		req.Cell.Obstacles = req.Cell.Obstacles[:1]
+		req.Cell.Boundary = orb.Ring{{0, 0}, {5, 0}, {5, 9}, {0, 9}, {0, 0}}
+		req.Arrays[0].Fixed = []Fixed{{Name: "p", At: r3.Vec{X: 1, Y: 1, Z: 1.5}}}
+		p := mustPlan(t, req)
+		n := 0
+		for _, w := range p.Warnings {
+			if !strings.Contains(w, "reaches the site limit") && !strings.Contains(w, "reaches the walls") {
+				continue
+			}
+			n++
+			for _, s := range tt.want {
+				if !strings.Contains(w, s) {
+					t.Errorf("%v: %q lacks %q", tt.kind, w, s)
+				}
+			}
+			for _, s := range tt.not {
+				if strings.Contains(w, s) {
+					t.Errorf("%v: %q says %q", tt.kind, w, s)
+				}
+			}
+		}
+		if n == 0 {
+			t.Errorf("%v: no boundary warning in %q", tt.kind, p.Warnings)
+		}
+	}
+}

@@ -208,7 +208,8 @@ func (ck *checker) warnings(atm acoustics.Atmosphere) []string {
 // impingement says where a point's conservative zones reach the walls, the
 // floor, the ceiling or an obstacle upstream of the collector
 // (Plan.Impingements, from zoneReaches): there the exhaust turns into a wall
-// jet that the free-jet model does not describe.
+// jet that the free-jet model does not describe. An outdoor site limit is
+// not a wall: there the zone runs on beyond it, off the site.
 func (ck *checker) impingement(p *PointResult) []string {
 	var out []string
 	for _, im := range ck.imps {
@@ -221,6 +222,11 @@ func (ck *checker) impingement(p *PointResult) []string {
 		}
 		if im.Surface == SurfaceObstacle {
 			out = append(out, fmt.Sprintf("%s: the %s strikes the obstacle %s about %s downstream of the exit: the exhaust spreads along its faces there as a wall jet, which the free-jet model does not describe; keep stations and cables clear of it", p.Name, zone, im.Obstacle, ck.m(im.X)))
+			continue
+		}
+		if im.Surface == SurfaceBoundary && ck.req.Cell.Kind == geometry.OutdoorPad {
+			// an outdoor site limit is not a wall (issue 8): the jet runs on
+			out = append(out, fmt.Sprintf("%s: the %s reaches the site limit about %s downstream of the exit: it runs on beyond the limit, off the site; keep people and equipment out beyond the limit downstream during runs, and warn the neighbours or close the road there", p.Name, zone, ck.m(im.X)))
 			continue
 		}
 		what := map[string]string{SurfaceBoundary: ck.boundaryName(), SurfaceFloor: ck.floorName(), SurfaceCeiling: "ceiling"}[im.Surface]

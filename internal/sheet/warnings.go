@@ -161,7 +161,7 @@ func (b *builder) warningLines() []warnLine {
 			s = fmt.Sprintf("%s: the %s%s: wall jet there; keep stations and cables clear", pts, what, b.downstream(g.xs))
 			if strings.HasSuffix(what, "reaches the site limit") {
 				// a site limit is a line on the ground, not a wall
-				s = fmt.Sprintf("%s: the %s%s and runs on beyond it", pts, what, b.downstream(g.xs))
+				s = fmt.Sprintf("%s: the %s%s and runs on beyond it, off the site: keep people out there downstream", pts, what, b.downstream(g.xs))
 			}
 		case "strike":
 			obs := "the obstacle " + g.names[0]
