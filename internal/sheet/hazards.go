@@ -16,8 +16,9 @@ import (
 // as the planner reports it: where a zone of one or more operating points
 // reaches the floor, the ceiling, the boundary or an obstacle
 // (Plan.Impingements; the zones the surfaces carry on, Plan.Attached,
-// start at the same contacts), where buoyancy starts to bend the jet, or
-// where a crew position stands inside a zone. The planner's warnings say
+// start at the same contacts), where buoyancy starts to bend the jet, where
+// the collector does not capture the plume (at its inlet, Capture warn or
+// blocked), or where a crew position stands inside a zone. The planner's warnings say
 // the same in words; the sheet marks the place and draws nothing the
 // planner does not report (no contact beyond a capturing collector).
 type hazard struct {
@@ -97,6 +98,23 @@ func (b *builder) hazards(merge float64) []hazard {
 			continue
 		}
 		ps = append(ps, place{"buoyancy bends the jet " + dir + " beyond here", p.Name, bu.Onset, orb.Point{a.X, a.Y}})
+	}
+	// a capture warning is marked at the collector inlet, where the plume
+	// meets (or misses) the collector
+	if col := c.Collector; col != nil {
+		for k := range b.plan.Points {
+			p := &b.plan.Points[k]
+			var kind string
+			switch p.Capture {
+			case planner.OK:
+				continue
+			case planner.Blocked:
+				kind = "collector capture blocked: exhaust will spill into the cell"
+			default:
+				kind = "collector capture warn: the plume's edge may spill past the inlet"
+			}
+			ps = append(ps, place{kind, p.Name, b.axial(col.Inlet), orb.Point{col.Inlet.X, col.Inlet.Y}})
+		}
 	}
 	seenCrew := map[string]bool{}
 	for _, e := range b.plan.Crew {

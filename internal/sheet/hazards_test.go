@@ -216,6 +216,13 @@ func TestHazardMarksFromThePlanner(t *testing.T) {
 					reports = append(reports, pt(e.At.X, e.At.Y))
 				}
 			}
+			if col := p.Request.Cell.Collector; col != nil {
+				for k := range p.Points {
+					if p.Points[k].Capture != planner.OK {
+						reports = append(reports, pt(col.Inlet.X, col.Inlet.Y))
+					}
+				}
+			}
 			for _, q := range marks {
 				best := math.Inf(1)
 				for _, r := range reports {
@@ -309,5 +316,42 @@ func TestClearanceViewRingsCarriedBlocks(t *testing.T) {
 	}
 	if !found {
 		t.Fatal("no clearance view")
+	}
+}
+
+// TestCaptureWarningMarked: the warnings panel says triangles mark where
+// its warnings apply, so a collector capture warning (warn or blocked) has
+// a triangle at the collector inlet; both demos with a collector have one
+// (the anechoic demo warns, the hard-wall room blocks: their planner
+// output).
+func TestCaptureWarningMarked(t *testing.T) {
+	const near = 5.5 // mm, as in TestHazardMarksFromThePlanner
+	for _, d := range []string{"anechoic-model-jet.yaml", "hard-wall-exhaust-room.yaml"} {
+		t.Run(d, func(t *testing.T) {
+			p := demoPlan(t, filepath.Join("../../layouts", d))
+			col := p.Request.Cell.Collector
+			n := 0
+			for k := range p.Points {
+				if p.Points[k].Capture != planner.OK {
+					n++
+				}
+			}
+			if col == nil || n == 0 {
+				t.Fatalf("the demo has no capture warning to mark")
+			}
+			m := build(t, p, sheet.Options{})
+			pt, _ := planMap(t, m, p)
+			at := pt(col.Inlet.X, col.Inlet.Y)
+			best := math.Inf(1)
+			for _, q := range hazardCentres(m) {
+				best = math.Min(best, math.Hypot(q.X-at.X, q.Y-at.Y))
+			}
+			if best > near {
+				t.Errorf("capture warning: the nearest triangle is %.1f mm from the collector inlet, want within %.1f mm", best, near)
+			}
+			if !strings.Contains(allText(m), "capture") {
+				t.Errorf("no text on the sheet names the capture warning")
+			}
+		})
 	}
 }

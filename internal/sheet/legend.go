@@ -54,7 +54,7 @@ func (b *builder) legendEntries() []legendEntry {
 		}, "exhaust collector inlet")
 	}
 	if len(b.hazardsDrawn) > 0 {
-		add(func(r Rect) []Shape { return warningTriangle(Pt{r.X + 2, r.Y + r.H/2 + 0.3}, 1.5) }, "a zone meets a surface (wall jet) or bends, or a crew position is in a zone: see the warnings")
+		add(func(r Rect) []Shape { return warningTriangle(Pt{r.X + 2, r.Y + r.H/2 + 0.3}, 1.5) }, "a zone meets a surface or bends, the collector does not capture it, or a crew position is in a zone: see the warnings")
 	}
 	add(func(r Rect) []Shape { return datumSymbol(Pt{r.X + r.H/2 + 0.5, r.Y + r.H/2}, r.H/2*0.9) }, "datum (0, 0)")
 	if len(c.Marks) > 0 {
