@@ -17,7 +17,7 @@ func newCheckCommand(stdout io.Writer) *cobra.Command {
 	var asBuilt, unitsName, format string
 	c := &cobra.Command{
 		Use:   "check LAYOUT",
-		Short: "Check stations at fixed positions and exit 3 if any is blocked",
+		Short: "Check stations and crew positions and exit 3 if any station is blocked or anyone stands in a zone",
 		Long: `Run every check of 'arcwright plan' on the layout's stations at fixed
 positions and print each station's verdict. With --as-built, positions measured
 after set-up replace the planned ones: a CSV file with a header row naming
@@ -38,9 +38,17 @@ height_ft, as the station CSV has) is read like z; the two must agree.
 A station is reported ok only if every check passed for every operating
 point; a station that could not be evaluated is never ok.
 
-Exit status: 0 when every station was evaluated and none is blocked (warnings
-allowed), 3 when any station is blocked, 1 on bad input, 2 on a bad command
-line.`,
+The layout's crew positions are checked too: a crew position inside (or
+within the margin of) a velocity or hot zone of any operating point is a
+place where no one may stand during runs, and one past a noise limit needs
+hearing protection chosen under the site's procedures; each is listed with
+its worst operating point. The plan's warnings (collector capture, wall
+jets, crew exposure, settings the layout gives but the site ignores) follow.
+
+Exit status: 0 when every station was evaluated, none is blocked and no
+crew position is inside a zone (warnings, and crew positions past a noise
+limit only, allowed), 3 when any station is blocked or any crew position is
+inside a zone, 1 on bad input, 2 on a bad command line.`,
 		Args: oneLayout,
 		RunE: func(cmd *cobra.Command, args []string) error {
 			p, err := loadPlan(args[0], unitsName, asBuilt)
@@ -54,7 +62,7 @@ line.`,
 			} else {
 				checkText(stdout, p)
 			}
-			if p.Blocked > 0 {
+			if p.Blocked > 0 || crewInZone(p) > 0 {
 				return errBlocked
 			}
 			return nil
@@ -104,5 +112,95 @@ func checkText(w io.Writer, p *planner.Plan) {
 		fmt.Fprintf(w, "%d %s not measured: the as-built file leaves %s out or empty, so %s checked at %s planned %s only\n",
 			unmeasured, plural(unmeasured, "station", "stations"), plural(unmeasured, "it", "them"),
 			plural(unmeasured, "it was", "they were"), plural(unmeasured, "its", "their"), plural(unmeasured, "place", "places"))
+	}
+	checkCrewText(w, p)
+	if len(p.Warnings) > 0 {
+		fmt.Fprintln(w, "\nWarnings")
+		for _, s := range p.Warnings {
+			fmt.Fprintln(w, "  - "+s)
+		}
+	}
+}
+
+// crewWorst returns, for each crew position in layout order, its worst
+// entry of p.Crew: inside a zone first, then blocked, then warn, then the
+// loudest.
+func crewWorst(p *planner.Plan) []planner.CrewExposure {
+	var out []planner.CrewExposure
+	rank := func(e *planner.CrewExposure) int {
+		switch {
+		case e.InZone:
+			return 3
+		case e.Status == planner.Blocked:
+			return 2
+		case e.Status == planner.Warn:
+			return 1
+		}
+		return 0
+	}
+	for i := 0; i < len(p.Crew); {
+		j, w := i, i
+		for ; j < len(p.Crew) && p.Crew[j].Name == p.Crew[i].Name; j++ {
+			e, b := &p.Crew[j], &p.Crew[w]
+			if r, rb := rank(e), rank(b); r > rb || r == rb && !(e.AWeighted <= b.AWeighted) && !math.IsNaN(b.AWeighted) {
+				w = j
+			}
+		}
+		out = append(out, p.Crew[w])
+		i = j
+	}
+	return out
+}
+
+// crewInZone counts the crew positions inside a zone of some point.
+func crewInZone(p *planner.Plan) int {
+	n := 0
+	for _, e := range crewWorst(p) {
+		if e.InZone {
+			n++
+		}
+	}
+	return n
+}
+
+// checkCrewText lists the crew positions that are not ok, each at its
+// worst operating point, and a summary line; the reasons in full are among
+// the warnings.
+func checkCrewText(w io.Writer, p *planner.Plan) {
+	worst := crewWorst(p)
+	if len(worst) == 0 {
+		return
+	}
+	var zone, loud, action int
+	fmt.Fprintln(w)
+	tw := newTable(w, 0)
+	head := false
+	for _, e := range worst {
+		status := ""
+		switch {
+		case e.InZone:
+			zone++
+			status = "blocked: in a zone, no one may stand here during runs"
+		case e.Status == planner.Blocked:
+			loud++
+			status = "blocked: past a noise limit without hearing protection"
+		case e.Status == planner.Warn:
+			action++
+			status = "warn: above a noise action value"
+		default:
+			continue
+		}
+		if !head {
+			fmt.Fprintln(tw, "crew position\tstatus\tpoint\tdB(A)\thours\tNIOSH allows\t")
+			head = true
+		}
+		fmt.Fprintf(tw, "%s\t%s\t%s\t%.0f\t%.3g h\t%s\t\n", e.Name, status, e.Point, e.AWeighted, e.Hours, units.FormatHours(e.AllowedHours))
+	}
+	tw.Flush()
+	fmt.Fprintf(w, "%d crew %s: %d in a zone, %d past a noise limit, %d above an action value\n",
+		len(worst), plural(len(worst), "position", "positions"), zone, loud, action)
+	if zone > 0 {
+		fmt.Fprintf(w, "%d crew %s in a zone: no one may stand there during runs; move %s out of the zones (exit status 3)\n",
+			zone, plural(zone, "position", "positions"), plural(zone, "it", "them"))
 	}
 }

@@ -20,11 +20,12 @@ const (
 	exitOK      = 0 // done; for check: every station evaluated and none blocked
 	exitError   = 1 // bad input, unreadable layout, a failed write
 	exitUsage   = 2 // an unknown command or flag
-	exitBlocked = 3 // check: at least one station is blocked
+	exitBlocked = 3 // check: at least one station is blocked, or a crew position is inside a zone
 )
 
-// errBlocked is returned by check when a station is blocked.
-var errBlocked = errors.New("at least one station is blocked")
+// errBlocked is returned by check when a station is blocked or a crew
+// position is inside a zone.
+var errBlocked = errors.New("at least one station is blocked or crew position is inside a zone")
 
 // usageError marks an error in the command line itself.
 type usageError struct{ err error }

@@ -1,0 +1,92 @@
+package main
+
+import (
+	"os"
+	"path/filepath"
+	"strings"
+	"testing"
+)
+
+// demoEdit writes demo name with each old→new replacement applied (each
+// old must occur) to dir and returns its path.
+func demoEdit(t *testing.T, dir, name string, repl ...string) string {
+	t.Helper()
+	data, err := os.ReadFile(demoDir + "/" + name + ".yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := string(data)
+	for i := 0; i+1 < len(repl); i += 2 {
+		if !strings.Contains(text, repl[i]) {
+			t.Fatalf("%s: no %q to replace", name, repl[i])
+		}
+		text = strings.Replace(text, repl[i], repl[i+1], 1)
+	}
+	path := filepath.Join(dir, name+".yaml")
+	if err := os.WriteFile(path, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	return path
+}
+
+// cutBetween returns the replacement pair that removes text from the line
+// starting with from up to (not including) the line starting with to.
+func cutBetween(t *testing.T, name, from, to string) [2]string {
+	t.Helper()
+	data, err := os.ReadFile(demoDir + "/" + name + ".yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	text := string(data)
+	a, b := strings.Index(text, from), strings.Index(text, to)
+	if a < 0 || b < a {
+		t.Fatalf("%s: no %q before %q", name, from, to)
+	}
+	return [2]string{text[a:b], ""}
+}
+
+// TestCheckCrew checks that the gate reports people: a crew position
+// inside a zone is exit 3 even when every station passes, a crew position
+// past a noise limit is listed, and the plan's warnings are printed.
+func TestCheckCrew(t *testing.T) {
+	const demo = "hard-wall-exhaust-room"
+	arcA := cutBetween(t, demo, "  - name: A ", "  - name: R ")
+	high := cutBetween(t, demo, "      - name: ref-high", "  - name: F ")
+	dir := t.TempDir()
+	// the demo's crew position "door" (5.5 m, 1.1 m) is inside EX-2's
+	// velocity zone (bent by buoyancy); only stations R (ref-side) and F
+	// remain, both warn
+	path := demoEdit(t, dir, demo, arcA[0], arcA[1], high[0], high[1])
+	out, errOut, code := arc(t, "check", path)
+	if code != exitBlocked {
+		t.Errorf("crew in a zone: exit %d, want %d\n%s%s", code, exitBlocked, out, errOut)
+	}
+	for _, want := range []string{
+		"0 blocked",                 // the stations themselves pass
+		"door",                      // the crew position in the zone
+		"inside the velocity zone",  // and why
+		"rig operator",              // past a noise limit (117 dB(A) for 2 h)
+		"Warnings",                  // the plan's warnings
+		"collector capture blocked", // one of them
+		"crew position in a zone",   // the summary names the cause of exit 3
+	} {
+		if !strings.Contains(out, want) {
+			t.Errorf("check output lacks %q:\n%s", want, out)
+		}
+	}
+	if _, _, code := arc(t, "check", path, "--format", "json"); code != exitBlocked {
+		t.Errorf("--format json: exit %d, want %d", code, exitBlocked)
+	}
+	// the crew position moved out of the zone (behind the nozzle, by the
+	// rig operator): noise alone is a warning of the gate, exit 0
+	path = demoEdit(t, dir, demo, arcA[0], arcA[1], high[0], high[1], "at: [5500, 1100]", "at: [600, 3000]")
+	if out, errOut, code := arc(t, "check", path); code != exitOK || !strings.Contains(out, "rig operator") {
+		t.Errorf("crew out of the zones: exit %d, want 0 and the crew listed\n%s%s", code, out, errOut)
+	}
+	// layout warnings reach check's text
+	pad := demoEdit(t, dir, "outdoor-static-pad", "noise:\n", "noise:\n  room_absorption: 0.3\n")
+	out, errOut, code = arc(t, "check", pad)
+	if !strings.Contains(out, "room_absorption") {
+		t.Errorf("outdoor pad with a room absorption: exit %d, no warning about it\n%s%s", code, out, errOut)
+	}
+}
