@@ -90,3 +90,39 @@ func TestCheckCrew(t *testing.T) {
 		t.Errorf("outdoor pad with a room absorption: exit %d, no warning about it\n%s%s", code, out, errOut)
 	}
 }
+
+// TestEmptyFileNames checks that an empty file name, for any flag that
+// names a file or for the layout argument, is a bad command line (exit 2)
+// naming the flag, and that nothing is written.
+func TestEmptyFileNames(t *testing.T) {
+	dir := t.TempDir()
+	layoutPath := copyDemo(t, dir)
+	for _, c := range []struct {
+		args []string
+		flag string
+	}{
+		{[]string{"check", layoutPath, "--as-built", ""}, "--as-built"},
+		{[]string{"check", layoutPath, "--as-built="}, "--as-built"},
+		{[]string{"plan", layoutPath, "--pdf", ""}, "--pdf"},
+		{[]string{"plan", layoutPath, "--csv", ""}, "--csv"},
+		{[]string{"plan", layoutPath, "--json", ""}, "--json"},
+		{[]string{"plan", layoutPath, "--geojson", ""}, "--geojson"},
+		{[]string{"plan", layoutPath, "--as-built-template", ""}, "--as-built-template"},
+		{[]string{"plan", layoutPath, "--pdf", filepath.Join(dir, "x.pdf"), "--csv", ""}, "--csv"},
+		{[]string{"plume", "--layout", "", "--point", "P"}, "--layout"},
+		{[]string{"noise", "--layout", "", "--point", "P", "--distance", "5m"}, "--layout"},
+		{[]string{"air", ""}, "layout"},
+		{[]string{"init", ""}, "file name"},
+		{[]string{"validate", ""}, "layout"},
+		{[]string{"plan", ""}, "layout"},
+		{[]string{"check", ""}, "layout"},
+	} {
+		out, errOut, code := arc(t, c.args...)
+		if code != exitUsage || !strings.Contains(errOut, c.flag) || !strings.Contains(errOut, "empty") {
+			t.Errorf("%q: exit %d, %q %q; want %d naming %s as empty", c.args, code, out, errOut, exitUsage, c.flag)
+		}
+	}
+	if got := names(t, dir); len(got) != 1 {
+		t.Errorf("files after the refused runs: %q, want only the layout", got)
+	}
+}

@@ -70,6 +70,23 @@ func oneLayout(cmd *cobra.Command, args []string) error {
 		return usageError{fmt.Errorf("%s needs the layout file, e.g. '%s layouts/anechoic-model-jet.yaml'", cmd.CommandPath(), cmd.CommandPath())}
 	case len(args) > 1:
 		return usageError{fmt.Errorf("%s takes one layout file, got %d arguments: %s", cmd.CommandPath(), len(args), strings.Join(args, " "))}
+	case args[0] == "":
+		return usageError{fmt.Errorf("%s: the layout file name is empty", cmd.CommandPath())}
+	}
+	return nil
+}
+
+// fileFlags are the flags that name a file to read or write.
+var fileFlags = []string{"layout", "as-built", "pdf", "csv", "json", "geojson", "as-built-template"}
+
+// emptyFileFlags refuses a file flag given with an empty name (a shell
+// variable that was not set, say): it is never "not given", which would
+// check the planned positions or write nothing without a word.
+func emptyFileFlags(cmd *cobra.Command, _ []string) error {
+	for _, name := range fileFlags {
+		if f := cmd.Flags().Lookup(name); f != nil && f.Changed && f.Value.String() == "" {
+			return usageError{fmt.Errorf("--%s: the file name is empty; give a file name (or leave the flag out)", name)}
+		}
 	}
 	return nil
 }
@@ -79,6 +96,9 @@ func atMostOne(what string) cobra.PositionalArgs {
 	return func(cmd *cobra.Command, args []string) error {
 		if len(args) > 1 {
 			return usageError{fmt.Errorf("%s takes at most one %s, got %d arguments: %s", cmd.CommandPath(), what, len(args), strings.Join(args, " "))}
+		}
+		if len(args) == 1 && args[0] == "" {
+			return usageError{fmt.Errorf("%s: the %s is empty", cmd.CommandPath(), what)}
 		}
 		return nil
 	}
@@ -126,6 +146,7 @@ codes and licensed practice.`,
 	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error {
 		return usageError{fmt.Errorf("%s: %w", strings.TrimPrefix(c.CommandPath(), "arcwright "), err)}
 	})
+	root.PersistentPreRunE = emptyFileFlags
 	root.SetVersionTemplate("arcwright {{.Version}}\n")
 	root.AddCommand(
 		newPlumeCommand(stdout),
