@@ -1,6 +1,7 @@
 package main
 
 import (
+	"fmt"
 	"os"
 	"path/filepath"
 	"strings"
@@ -124,5 +125,63 @@ func TestEmptyFileNames(t *testing.T) {
 	}
 	if got := names(t, dir); len(got) != 1 {
 		t.Errorf("files after the refused runs: %q, want only the layout", got)
+	}
+}
+
+// lineOf returns the 1-based line of the first line of path that contains
+// s.
+func lineOf(t *testing.T, path, s string) int {
+	t.Helper()
+	data, err := os.ReadFile(path)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for i, l := range strings.Split(string(data), "\n") {
+		if strings.Contains(l, s) {
+			return i + 1
+		}
+	}
+	t.Fatalf("%s: no line with %q", path, s)
+	return 0
+}
+
+// TestSheetScaleValidated checks that validate and plan --pdf treat the
+// layout's sheet scale alike, at its line and key: a scale of the other
+// family than units.sheet is a contradiction in the file (refused by
+// both); a scale that does not fit the paper is a warning of validate and
+// the refusal of plan --pdf, both at sheet.scale.
+func TestSheetScaleValidated(t *testing.T) {
+	const demo = "hard-wall-exhaust-room"
+	for _, c := range []struct {
+		name   string
+		repl   []string
+		refuse bool // validate refuses; else warns
+		want   string
+	}{
+		{"feet scale on a metric sheet", []string{`scale: "1:25"`, `scale: "1\" = 20'"`}, true, "feet-and-inches scale"},
+		{"metric scale on a feet sheet", []string{"sheet: metric", "sheet: imperial"}, true, "metric scale"},
+		{"too large for the paper", []string{`scale: "1:25"`, `scale: "1:1"`}, false, "does not fit"},
+		{"paper too small for the scale", []string{"paper: A3", "paper: Letter"}, false, "does not fit"},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			dir := t.TempDir()
+			path := demoEdit(t, dir, demo, c.repl...)
+			at := fmt.Sprintf("%s:%d: sheet.scale: ", path, lineOf(t, path, "  scale: "))
+			out, errOut, code := arc(t, "validate", path)
+			switch {
+			case c.refuse && (code != exitError || !strings.Contains(errOut, at) || !strings.Contains(errOut, c.want)):
+				t.Errorf("validate: exit %d, %q; want %d and %q… %q", code, errOut, exitError, at, c.want)
+			case !c.refuse && (code != exitOK || !strings.Contains(out, "warning: "+at) || !strings.Contains(out, c.want)):
+				t.Errorf("validate: exit %d, %q %q; want 0 and a warning %q… %q", code, out, errOut, at, c.want)
+			}
+			pdf := filepath.Join(dir, "x.pdf")
+			_, errOut, code = arc(t, "plan", path, "--pdf", pdf)
+			if code != exitError || !strings.Contains(errOut, at) || !strings.Contains(errOut, c.want) {
+				t.Errorf("plan --pdf: exit %d, %q; want %d and %q… %q", code, errOut, exitError, at, c.want)
+			}
+			if _, err := os.Stat(pdf); err == nil {
+				t.Errorf("plan --pdf refused but wrote %s", pdf)
+			}
+		})
 	}
 }

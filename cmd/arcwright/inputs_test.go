@@ -1,6 +1,7 @@
 package main
 
 import (
+	"fmt"
 	"os"
 	"path/filepath"
 	"regexp"
@@ -313,7 +314,7 @@ func TestValidateSheetScaleWarns(t *testing.T) {
 		t.Fatal(err)
 	}
 	out, errOut, code := arc(t, "validate", path)
-	if code != exitOK || !strings.Contains(out, "warning: "+path+": sheet: scale does not fit") {
+	if code != exitOK || !strings.Contains(out, fmt.Sprintf("warning: %s:%d: sheet.scale: scale does not fit", path, lineOf(t, path, "scale: \"1:10\""))) {
 		t.Errorf("got exit %d, %q %q, want 0 and a warning about the sheet", code, out, errOut)
 	}
 }

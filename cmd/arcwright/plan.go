@@ -220,6 +220,10 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	}
 	// every file is written to a temporary first: a failure leaves none
 	if err := export.WriteFiles(outs, ins, w); err != nil {
+		if (errors.Is(err, sheet.ErrScale) || errors.Is(err, sheet.ErrPaperRoom)) && o.Scale == "" && o.Paper == "" {
+			// the layout's paper and scale: at their line and key
+			return layout.LocateSheet(p.Request, err)
+		}
 		return layout.Locate(p.Request, err)
 	}
 	switch {

@@ -59,7 +59,8 @@ func planCheck(req *planner.Request) ([]layout.Warning, error) {
 	}
 	var warns []layout.Warning
 	if err := sheet.Write(io.Discard, p, sheet.Options{}); errors.Is(err, sheet.ErrScale) || errors.Is(err, sheet.ErrPaperRoom) {
-		warns = append(warns, layout.Warning{File: req.Source, Field: "sheet", Msg: strings.TrimPrefix(err.Error(), "sheet: ") + " (plan --pdf needs --paper or --scale)"})
+		field, line := layout.SheetField(req)
+		warns = append(warns, layout.Warning{File: req.Source, Line: line, Field: field, Msg: strings.TrimPrefix(err.Error(), "sheet: ") + " (plan --pdf refuses it without --paper or --scale)"})
 	} else if err != nil {
 		return nil, layout.Locate(req, err)
 	}

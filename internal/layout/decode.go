@@ -176,6 +176,12 @@ func (d *decoder) sheetSection(top *section) planner.SheetOptions {
 		if v, ok := d.text(n, s.field("scale")); ok {
 			if den, err := sheet.ParseScale(v); err == nil {
 				o.Scale = den
+				// one family of scales per sheet: a scale of the other
+				// family than units.sheet contradicts it, and plan --pdf
+				// would refuse it
+				if err := sheet.CheckScale(den, d.sys); err != nil {
+					d.add(ErrInvalid, err, n.Line, s.field("scale"), fmt.Sprintf("%s (units.sheet is %s)", strings.TrimPrefix(err.Error(), sheet.ErrScale.Error()+": "), d.sys))
+				}
 			} else {
 				d.add(ErrInvalid, nil, n.Line, s.field("scale"), fmt.Sprintf("want a standard scale (%s), got %q", sheet.ScaleNames(), v))
 			}

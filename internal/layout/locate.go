@@ -76,6 +76,30 @@ func Locate(req *planner.Request, err error) error {
 	return Errors{{File: req.Source, Line: line, Field: field, Msg: detail, kind: ErrInvalid, cause: err}}
 }
 
+// SheetField returns the key of the layout's sheet wishes that an error
+// of the sheet's scale or paper (sheet.ErrScale, sheet.ErrPaperRoom) is
+// about, and its line: sheet.scale when the layout gives a scale, else
+// sheet.paper when it gives a paper, else sheet.
+func SheetField(req *planner.Request) (field string, line int) {
+	switch {
+	case req.Sheet.Scale != 0:
+		field = "sheet.scale"
+	case req.Sheet.Paper != "":
+		field = "sheet.paper"
+	default:
+		field = "sheet"
+	}
+	return field, fieldLine(req.Source, field)
+}
+
+// LocateSheet returns err, an error of the sheet's scale or paper made
+// with the layout's sheet wishes, at the key and line of [SheetField].
+func LocateSheet(req *planner.Request, err error) error {
+	field, line := SheetField(req)
+	msg := strings.Replace(strings.TrimPrefix(err.Error(), "sheet: "), ": sheet: ", ": ", 1)
+	return Errors{{File: req.Source, Line: line, Field: field, Msg: msg, kind: ErrInvalid, cause: err}}
+}
+
 // duplicateID finds the station named id twice: the field and line of a
 // single station given that name, and a message saying what else has it.
 func duplicateID(req *planner.Request, id string) (field string, line int, msg string) {
