@@ -119,7 +119,7 @@ func TestLargeSite(t *testing.T) {
 // across the whole frame and are left out.
 func TestDemoPlanFills(t *testing.T) {
 	drawn := map[sheet.Style]bool{
-		sheet.StyleBoundary: true, sheet.StyleTreatment: true, sheet.StyleObstacle: true, sheet.StyleKeepOut: true,
+		sheet.StyleBoundary: true, sheet.StyleSiteLimit: true, sheet.StyleTreatment: true, sheet.StyleObstacle: true, sheet.StyleKeepOut: true,
 		sheet.StyleArray: true, sheet.StyleMark: true, sheet.StyleNozzle: true,
 	}
 	for _, d := range demos {

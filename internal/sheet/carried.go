@@ -10,7 +10,7 @@ import (
 // The zones that the free-jet envelopes do not describe: the bent zones of
 // a buoyant plume (jet.BentPlume) and the zones carried on by the floor,
 // the ceiling and the walls (planner.Attached). The sheet draws them for
-// the drawn points, in the drawn zones' styles, cut at the boundary like
+// the drawn points, in the drawn zones' styles, cut at the walls like
 // the free zones.
 
 // drawnZone is one of the two zones the sheet draws.

@@ -65,6 +65,25 @@ const maxExaggeration = 10
 // minViewH is the height below which a side view is a sliver, mm.
 const minViewH = 30.0
 
+// zoneStops returns the axial positions, m, where a side view cuts the
+// zones: the walls on the axis (axisWalls) of a walled cell; ±Inf outdoors,
+// where the jet runs on beyond the site limit (issue 8).
+func (b *builder) zoneStops() (lo, hi float64) {
+	if !b.walled() {
+		return math.Inf(-1), math.Inf(1)
+	}
+	return b.axisWalls()
+}
+
+// boundaryStyle is the style of the cell's boundary: a site limit is
+// dashed.
+func (b *builder) boundaryStyle() Style {
+	if b.req.Cell.Kind == geometry.OutdoorPad {
+		return StyleSiteLimit
+	}
+	return StyleBoundary
+}
+
 // axisWalls returns the axial positions where the jet axis, in plan, leaves
 // the boundary upstream and downstream of the exit, m; ±Inf for an open
 // cell or where the axis does not leave it within reach.
@@ -319,7 +338,7 @@ func (v *sideView) placeText(s string, anchor, dir Pt, clear float64, far []floa
 func (b *builder) elevationHeight(u0, u1 float64) (float64, bool) {
 	c := &b.req.Cell
 	z0 := b.req.Exit.Exit.Z
-	lo, hi := b.axisWalls()
+	lo, hi := b.zoneStops()
 	top := z0 + 0.3
 	for _, o := range []zoneOutline{b.zs.velM, b.zs.hotM} {
 		for _, q := range o {
@@ -401,9 +420,13 @@ func (b *builder) elevation(x, y, w, maxH float64, sx int) (*sideView, bool) {
 	lo, hi := b.axisWalls()
 	for _, u := range []float64{lo, hi} {
 		if finite(u) && u > u0 && u < u1 {
-			v.shapes = append(v.shapes, line(StyleBoundary, t.pt(u, 0), t.pt(u, roof)))
+			v.shapes = append(v.shapes, line(b.boundaryStyle(), t.pt(u, 0), t.pt(u, roof)))
+			if !b.walled() {
+				v.placeText("site limit", t.pt(u, roof*0.92), Pt{-1, 0}, 0.5, featFar, "site limit")
+			}
 		}
 	}
+	lo, hi = b.zoneStops()
 	for _, ob := range b.axisObstacles(u0, u1) {
 		z1 := math.Min(ob.z1, top)
 		if z1 > ob.z0 {
@@ -463,7 +486,7 @@ func (b *builder) clearance(x, y, w, maxH float64, sx int) (*sideView, bool) {
 	c := &b.req.Cell
 	z0 := b.req.Exit.Exit.Z
 	u0, u1 := b.axialRange()
-	lo, hi := b.axisWalls()
+	lo, hi := b.zoneStops()
 	rmax := b.gov.Exit.Diameter
 	for i := range b.plan.Stations {
 		rmax = math.Max(rmax, b.plan.Stations[i].Jet.R)
@@ -485,10 +508,15 @@ func (b *builder) clearance(x, y, w, maxH float64, sx int) (*sideView, bool) {
 	v.grid("r")
 	t := v.t
 	pr := b.pr
-	for _, u := range []float64{lo, hi} {
+	wlo, whi := b.axisWalls()
+	for _, u := range []float64{wlo, whi} {
 		if finite(u) && u > u0 && u < u1 {
-			v.shapes = append(v.shapes, line(StyleBoundary, t.pt(u, 0), t.pt(u, top)))
-			v.placeText("wall on the axis", t.pt(u, top*0.92), Pt{-1, 0}, 0.5, featFar, "wall")
+			v.shapes = append(v.shapes, line(b.boundaryStyle(), t.pt(u, 0), t.pt(u, top)))
+			if b.walled() {
+				v.placeText("wall on the axis", t.pt(u, top*0.92), Pt{-1, 0}, 0.5, featFar, "wall")
+			} else {
+				v.placeText("site limit", t.pt(u, top*0.92), Pt{-1, 0}, 0.5, featFar, "site limit")
+			}
 		}
 	}
 	v.zones(0, true, v.clipRect(math.Max(lo, u0), math.Min(hi, u1), 0, top))

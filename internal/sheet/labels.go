@@ -260,8 +260,8 @@ func (v *planView) zoneLabels(z zoneSet) {
 			}
 		}
 	}
-	// zones cut at the boundary of a bounded cell, or running out of the
-	// frame of an open one
+	// zones cut at the walls of a walled cell, or running out of the frame
+	// of an open cell or an outdoor pad (whose site limit is not a wall)
 	cell := &v.b.req.Cell
 	var beyond []string
 	for _, zz := range []struct {
@@ -275,7 +275,7 @@ func (v *planView) zoneLabels(z zoneSet) {
 		for _, q := range planRing(fr, zz.out) {
 			p := v.t.pt(q[0], q[1])
 			out := p.X < v.frame.X || p.X > v.frame.Right() || p.Y < v.frame.Y || p.Y > v.frame.Bottom()
-			if cell.Bounded() {
+			if v.b.walled() {
 				out = !cell.Contains(orb.Point{q[0], q[1]})
 			}
 			if out {
@@ -287,7 +287,7 @@ func (v *planView) zoneLabels(z zoneSet) {
 	if len(beyond) == 0 {
 		return
 	}
-	if cell.Bounded() {
+	if v.b.walled() {
 		then := " See the plan's warnings where a zone meets a wall."
 		if len(v.b.plan.Impingements) == 0 && len(v.b.plan.Attached) == 0 {
 			// the planner finds no wall contact (a collector takes the jet

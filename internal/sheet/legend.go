@@ -26,7 +26,11 @@ func (b *builder) legendEntries() []legendEntry {
 			geometry.HardWalled: "boundary: inner wall face",
 			geometry.OutdoorPad: "site limit",
 		}[c.Kind]
-		add(func(r Rect) []Shape { a, z := mid(r); return []Shape{line(StyleBoundary, a, z)} }, what)
+		st := StyleBoundary
+		if c.Kind == geometry.OutdoorPad {
+			what, st = "site limit (not a wall: the zones run on beyond it)", StyleSiteLimit
+		}
+		add(func(r Rect) []Shape { a, z := mid(r); return []Shape{line(st, a, z)} }, what)
 		if c.TreatmentDepth > 0 {
 			add(func(r Rect) []Shape { return []Shape{rectShape(StyleTreatment, r)} }, "acoustic treatment behind it")
 		}

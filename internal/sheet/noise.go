@@ -28,7 +28,7 @@ type noiseLabel struct {
 func (v *planView) noiseContours() []noiseLabel {
 	b := v.b
 	var clip []Pt
-	if c := &b.req.Cell; c.Bounded() {
+	if c := &b.req.Cell; b.walled() {
 		clip = v.ringPts(orbPts(c.Boundary))
 	}
 	if b.noiseErr != nil {

@@ -216,7 +216,12 @@ func (v *planView) cell() {
 			outer := v.ringPts(orbPts(offsetRing(c.Boundary, c.TreatmentDepth)))
 			v.shapes = append(v.shapes, poly(StyleTreatment, outer, inner))
 		}
-		v.shapes = append(v.shapes, poly(StyleBoundary, inner))
+		if c.Kind == geometry.OutdoorPad {
+			v.shapes = append(v.shapes, poly(StyleSiteLimit, inner))
+			v.siteLimitLabel(inner)
+		} else {
+			v.shapes = append(v.shapes, poly(StyleBoundary, inner))
+		}
 		if v.name == "" && v.b.cropped {
 			v.breakMarks(inner)
 		}
@@ -286,6 +291,27 @@ func (v *planView) clipFeatureLabels() {
 	v.labels = out
 }
 
+// siteLimitLabel names an outdoor site limit (page ring inner) on the plan:
+// where the jet axis crosses it downstream when that is in the frame, else
+// at the middle of the first of its edges in the frame.
+func (v *planView) siteLimitLabel(inner []Pt) {
+	f := v.frame.inset(4)
+	in := func(p Pt) bool { return p.X > f.X && p.X < f.Right() && p.Y > f.Y && p.Y < f.Bottom() }
+	var at []Pt
+	if _, hi := v.b.axisWalls(); finite(hi) {
+		a := v.b.req.Exit.ToCell(geometry.JetPoint{X: hi})
+		at = append(at, v.t.pt(a.X, a.Y))
+	}
+	for i := range inner {
+		at = append(at, mul(add(inner[i], inner[(i+1)%len(inner)]), 0.5))
+	}
+	for _, p := range at {
+		if in(p) && v.placeText("site limit", FeatureLabel, "site limit", sizeSmall, p, Pt{0.7, -0.7}, 1, []float64{2, 4, 7}) {
+			return
+		}
+	}
+}
+
 // breakMarks draws a break mark (a short zigzag across the line) where the
 // boundary ring crosses the frame of a cropped plan, 3 mm inside it, and
 // says in the notes that the plan is cropped.
@@ -329,15 +355,24 @@ func (v *planView) breakMarks(ring []Pt) {
 	v.notes = append(v.notes, "The plan is cropped to the stations, zones and nozzle: the boundary runs on past the break marks at the frame, or lies wholly outside it.")
 }
 
+// walled reports whether the cell's boundary is a wall that stops the jet:
+// a bounded room or chamber. An outdoor site limit is not a wall (issue 8):
+// the jet runs on beyond it, and the sheet draws the zones on past it.
+func (b *builder) walled() bool {
+	c := &b.req.Cell
+	return c.Bounded() && c.Kind != geometry.OutdoorPad
+}
+
 // drawZones draws the margin bands, the velocity and hot zones and the
 // potential core of the governing point, and notes where they run out of
 // the frame.
 func (v *planView) drawZones(z zoneSet) {
 	fr := v.b.req.Exit
-	// in a bounded cell the zones stop at the boundary: past it there is
-	// no free jet to draw (the planner warns where a zone meets a wall)
+	// in a walled cell the zones stop at the walls: past them there is
+	// no free jet to draw (the planner warns where a zone meets a wall);
+	// an outdoor site limit is not a wall, the zones run on beyond it
 	var clip []Pt
-	if c := &v.b.req.Cell; c.Bounded() {
+	if c := &v.b.req.Cell; v.b.walled() {
 		clip = v.ringPts(orbPts(c.Boundary))
 	}
 	zone := func(s Style, o zoneOutline) {

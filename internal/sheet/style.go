@@ -19,6 +19,7 @@ const (
 	StyleDetail     Style = "detail"        // the outline of a detail view on the plan: long dash and two dots
 	StyleGrid       Style = "grid"          // the light coordinate grid
 	StyleBoundary   Style = "boundary"      // the cell boundary, thick
+	StyleSiteLimit  Style = "sitelimit"     // an outdoor site limit: thick dashes (a line on the ground, not a wall)
 	StyleTreatment  Style = "treatment"     // the treatment behind the boundary: thin, light hatching at −45°
 	StyleObstacle   Style = "obstacle"      // obstacles: solid outline, grey fill
 	StyleKeepOut    Style = "keepout"       // keep-out zones: chain outline, square cross-hatching
@@ -112,6 +113,7 @@ var styles = map[Style]StyleDef{
 	StyleDetail:     {Pen: Pen{Width: 0.3, Dash: []float64{5, 0.8, 0.5, 0.8, 0.5, 0.8}, Color: black}},
 	StyleGrid:       {Pen: Pen{Width: 0.1, Color: gridGrey}},
 	StyleBoundary:   {Pen: Pen{Width: 0.7, Color: black}},
+	StyleSiteLimit:  {Pen: Pen{Width: 0.6, Dash: []float64{5, 1.5}, Color: black}},
 	StyleTreatment:  {Pen: Pen{Width: 0.15, Color: midGrey}, Hatches: []Hatch{{Angle: -45, Spacing: 0.9, Pen: Pen{Width: 0.08, Color: midGrey}}}},
 	StyleObstacle:   {Pen: Pen{Width: 0.35, Color: black}, Fill: fill(lightFill)},
 	StyleKeepOut:    {Pen: Pen{Width: 0.3, Dash: []float64{3, 0.8, 0.4, 0.8}, Color: keepPlum}, Hatches: []Hatch{{Angle: 0, Spacing: 1.8, Pen: Pen{Width: 0.12, Color: keepPlum}}, {Angle: 90, Spacing: 1.8, Pen: Pen{Width: 0.12, Color: keepPlum}}}},

@@ -74,7 +74,7 @@ func TestLegendExplainsEverySymbol(t *testing.T) {
 				inLegend[s.Style] = true
 			}
 			explained := map[sheet.Style]bool{
-				sheet.StyleBoundary: true, sheet.StyleTreatment: true, sheet.StyleObstacle: true, sheet.StyleKeepOut: true,
+				sheet.StyleBoundary: true, sheet.StyleSiteLimit: true, sheet.StyleTreatment: true, sheet.StyleObstacle: true, sheet.StyleKeepOut: true,
 				sheet.StyleVelocity: true, sheet.StyleHot: true, sheet.StyleMargin: true, sheet.StyleCore: true,
 				sheet.StyleAxis: true, sheet.StyleNozzle: true, sheet.StyleCollector: true, sheet.StyleArray: true,
 				sheet.StyleBase: true, sheet.StyleMark: true, sheet.StyleStrike: true, sheet.StyleGrid: true,
