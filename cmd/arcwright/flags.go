@@ -180,5 +180,5 @@ func formatFlag(fs *pflag.FlagSet, value *string, choices ...string) {
 
 // unitsFlag adds the --units flag.
 func unitsFlag(fs *pflag.FlagSet, value *string) {
-	fs.Var(newChoice(value, "", "metric", "imperial"), "units", "units to print lengths and temperatures in: metric or imperial (default: the layout's, else metric)")
+	fs.Var(newChoice(value, "", "metric", "imperial"), "units", "units to print lengths and temperatures in, and the sheet's: metric or imperial (default: the layout's, else metric); a layout sheet.scale of the other family becomes the largest scale of this one not larger than it, with a note")
 }

@@ -185,3 +185,29 @@ func TestSheetScaleValidated(t *testing.T) {
 		})
 	}
 }
+
+// TestUnitsOverrideSheet checks that --units works on every unmodified
+// demo with --pdf: a layout scale of the other family is replaced by the
+// largest scale of the new family that is not larger than it (so that a
+// plan that fits still fits), and a note says so.
+func TestUnitsOverrideSheet(t *testing.T) {
+	for _, d := range demos {
+		for _, sys := range []string{"metric", "imperial"} {
+			dir := t.TempDir()
+			pdf := filepath.Join(dir, "x.pdf")
+			out, errOut, code := arc(t, "plan", demoDir+"/"+d+".yaml", "--units", sys, "--pdf", pdf)
+			if code != exitOK {
+				t.Errorf("%s --units %s --pdf: exit %d, %q", d, sys, code, errOut)
+				continue
+			}
+			if _, err := os.Stat(pdf); err != nil {
+				t.Errorf("%s --units %s: no sheet: %v", d, sys, err)
+			}
+			// the hard-wall demo's 1:25 on a feet-and-inches sheet is
+			// 3/8" = 1'-0" (1:32); 1/2" = 1'-0" (1:24) would be larger
+			if d == "hard-wall-exhaust-room" && sys == "imperial" && !strings.Contains(out, `sheet.scale: 1:25 is a metric scale; with --units imperial the sheet uses 3/8" = 1'-0" (1:32)`) {
+				t.Errorf("%s --units imperial: no note of the scale it uses:\n%s", d, out)
+			}
+		}
+	}
+}

@@ -137,7 +137,50 @@ func loadRequest(path, unitsOverride string) (*planner.Request, error) {
 	case "imperial":
 		req.Units = units.Imperial
 	}
+	if den := req.Sheet.Scale; den != 0 && sheet.CheckScale(den, req.Units) != nil {
+		// --units switched the sheet's family: the layout's scale becomes
+		// the largest of the new family not larger than it, so that a plan
+		// that fitted still fits
+		to := sameOrSmallerScale(den, req.Units)
+		field, line := layout.SheetField(req)
+		other := units.Metric
+		if req.Units == units.Metric {
+			other = units.Imperial
+		}
+		req.Sheet.Scale = to
+		req.Notes = append(req.Notes, layout.Warning{File: req.Source, Line: line, Field: field,
+			Msg: fmt.Sprintf("%s is a %s scale; with --units %s the sheet uses %s, the largest %s scale not larger than it",
+				sheet.ScaleName(den, other), familyWords(other), unitsOverride, sheet.ScaleName(to, req.Units), familyWords(req.Units))}.String())
+	}
 	return req, nil
+}
+
+// familyWords names the scales of a unit system's sheets.
+func familyWords(sys units.System) string {
+	if sys == units.Imperial {
+		return "feet-and-inches"
+	}
+	return "metric"
+}
+
+// sameOrSmallerScale returns the largest standard scale of the family of
+// sheets in sys that is not larger than 1:den (the smallest denominator at
+// least den), or the family's smallest scale when all are larger.
+func sameOrSmallerScale(den int, sys units.System) int {
+	best, smallest := 0, 0
+	for _, d := range sheet.StandardScales() {
+		if sheet.CheckScale(d, sys) != nil {
+			continue
+		}
+		if d >= den && (best == 0 || d < best) {
+			best = d
+		}
+		smallest = max(smallest, d)
+	}
+	if best == 0 {
+		return smallest
+	}
+	return best
 }
 
 // planRequest plans req, with the as-built file asBuilt ("" none).
