@@ -211,3 +211,20 @@ func TestUnitsOverrideSheet(t *testing.T) {
 		}
 	}
 }
+
+// TestCoaxialSecondaryDiameter checks that a secondary diameter not above
+// the primary one is a bad command line for noise as for plume, in the
+// user's words (the flags as typed), before any work.
+func TestCoaxialSecondaryDiameter(t *testing.T) {
+	coax := []string{"--nozzle", "coaxial", "--diameter", "1in", "--secondary-diameter", "0.5in", "--npr", "1.5", "--temperature-ratio", "1",
+		"--secondary-npr", "1.3", "--secondary-temperature-ratio", "1"}
+	for _, args := range [][]string{
+		append([]string{"noise", "--distance", "2m"}, coax...),
+		append([]string{"plume"}, coax...),
+	} {
+		_, errOut, code := arc(t, args...)
+		if code != exitUsage || !strings.Contains(errOut, "--secondary-diameter 0.5in") || !strings.Contains(errOut, "--diameter 1in") || strings.Contains(errOut, " m,") {
+			t.Errorf("%s: exit %d, %q; want %d naming the flags as typed", args[0], code, errOut, exitUsage)
+		}
+	}
+}

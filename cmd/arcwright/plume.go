@@ -183,6 +183,10 @@ func plumeInputs(o *PlumeOptions, fs *pflag.FlagSet) (jet.Nozzle, jet.Condition,
 		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, missing("secondary-npr and --secondary-diameter", "a coaxial nozzle needs its secondary stream and annulus")
 	case o.Nozzle == "coaxial" && fs.Changed("secondary-total-temperature") == fs.Changed("secondary-temperature-ratio"):
 		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{errors.New("give exactly one of --secondary-total-temperature and --secondary-temperature-ratio")}
+	case o.Nozzle == "coaxial" && !(o.SecondaryDiameter > o.Diameter):
+		// the annulus surrounds the primary nozzle: in the flags as typed
+		return jet.Nozzle{}, jet.Condition{}, jet.Limits{}, 0, usageError{fmt.Errorf("--secondary-diameter %s must exceed --diameter %s: it is the outer diameter of the annulus around the primary nozzle",
+			fs.Lookup("secondary-diameter").Value, fs.Lookup("diameter").Value)}
 	}
 	n := jet.Nozzle{Diameter: o.Diameter}
 	switch o.Nozzle {
