@@ -118,3 +118,32 @@ func TestOutdoorZonesPastSiteLimit(t *testing.T) {
 		t.Error("the hard-wall room's velocity zone is no longer cut at its walls")
 	}
 }
+
+// TestStationTableBoundaryHeading: the station table's boundary clearance
+// column names the boundary the cell has: the site limit of an outdoor pad
+// (not a wall, issue 8), the walls of a room.
+func TestStationTableBoundaryHeading(t *testing.T) {
+	for _, tt := range []struct {
+		demo, want, not string
+	}{
+		{"outdoor-static-pad.yaml", "Clearance site limit", "wall"},
+		{"hard-wall-exhaust-room.yaml", "Clearance wall", "site limit"},
+	} {
+		m := build(t, demoPlan(t, "../../layouts/"+tt.demo), sheet.Options{})
+		var heads []string
+		for _, pg := range m.Pages {
+			for _, tb := range pg.Tables {
+				if tb.Name != "stations" {
+					continue
+				}
+				for _, c := range tb.Columns {
+					heads = append(heads, strings.Join(c.Heading, " "))
+				}
+			}
+		}
+		all := strings.Join(heads, "|")
+		if !strings.Contains(all, tt.want) || strings.Contains(all, tt.not) {
+			t.Errorf("%s: station table headings %q, want %q and no %q", tt.demo, heads, tt.want, tt.not)
+		}
+	}
+}

@@ -22,7 +22,7 @@ func (b *builder) stationTable() tableSpec {
 			"; clearances are the smallest over all operating points, each with the point that governs it; " + pr.convention(),
 		heads: []string{"ID", "Ch", "Array", "Polar nominal (deg)", "Polar as placed (deg)", "Radius nominal " + u, "Radius as placed " + u,
 			"Height " + u, "X " + u, "Y " + u,
-			"Clearance velocity zone " + u, "Clearance hot zone " + u, "Clearance wall " + u, "Status", "Reason"},
+			"Clearance velocity zone " + u, "Clearance hot zone " + u, "Clearance " + b.boundaryWord() + " " + u, "Status", "Reason"},
 	}
 	n := len(t.heads)
 	t.right = make([]bool, n)
