@@ -84,6 +84,15 @@ func (b *builder) boundaryStyle() Style {
 	return StyleBoundary
 }
 
+// boundaryWord names the cell's boundary in a table heading: "site limit"
+// on an outdoor pad (not a wall, issue 8), else "wall".
+func (b *builder) boundaryWord() string {
+	if b.req.Cell.Kind == geometry.OutdoorPad {
+		return "site limit"
+	}
+	return "wall"
+}
+
 // axisWalls returns the axial positions where the jet axis, in plan, leaves
 // the boundary upstream and downstream of the exit, m; ±Inf for an open
 // cell or where the axis does not leave it within reach.

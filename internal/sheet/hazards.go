@@ -90,11 +90,12 @@ func (b *builder) hazards(merge float64) []hazard {
 		}
 		a := fr.ToCell(geometry.JetPoint{X: bu.Onset})
 		// the collector takes a captured plume before it bends; beyond the
-		// walls there is nothing to mark
+		// walls there is nothing to mark (an outdoor site limit is not a
+		// wall: the jet bends beyond it all the same)
 		if col := c.Collector; col != nil && p.Capture != planner.Blocked && bu.Onset >= b.axial(col.Inlet) {
 			continue
 		}
-		if c.Bounded() && !c.Contains(orb.Point{a.X, a.Y}) {
+		if b.walled() && !c.Contains(orb.Point{a.X, a.Y}) {
 			continue
 		}
 		ps = append(ps, place{"buoyancy bends the jet " + dir + " beyond here", p.Name, bu.Onset, orb.Point{a.X, a.Y}})

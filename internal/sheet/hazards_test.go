@@ -87,6 +87,31 @@ func fencePlan(t *testing.T) *planner.Plan {
 	return p
 }
 
+// shortPadPlan is the outdoor pad demo with its site limit moved in to
+// x = 380 ft, short of where buoyancy starts to bend the jets (150–192 ft
+// downstream of the exit at x = 260 ft, the planner's report), and without
+// the blast fence, which now lies off the site.
+func shortPadPlan(t *testing.T) *planner.Plan {
+	req, _, err := layout.Load("../../layouts/outdoor-static-pad.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	const ft = 0.3048 // m, exact
+	req.Cell.Boundary = orb.Ring{{0, 0}, {380 * ft, 0}, {380 * ft, 492 * ft}, {0, 492 * ft}, {0, 0}}
+	var keep []geometry.Obstacle
+	for _, o := range req.Cell.Obstacles {
+		if o.Name != "blast fence" {
+			keep = append(keep, o)
+		}
+	}
+	req.Cell.Obstacles = keep
+	p, err := planner.New(req)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return p
+}
+
 // TestHazardMarksFromThePlanner: every place where the planner reports a
 // zone reaching a surface (Plan.Impingements, and the zones the surfaces
 // carry on, Plan.Attached, which start there) has a warning triangle on
@@ -107,7 +132,7 @@ func TestHazardMarksFromThePlanner(t *testing.T) {
 	for _, d := range demos {
 		cases = append(cases, tc{filepath.Base(d), demoPlan(t, d)})
 	}
-	cases = append(cases, tc{"fence across the axis", fencePlan(t)})
+	cases = append(cases, tc{"fence across the axis", fencePlan(t)}, tc{"pad, site limit short of the bend", shortPadPlan(t)})
 	// near is how close a mark must be, mm: the sheet marks places of one
 	// kind within 5 mm of each other with one triangle (DERIVED from the
 	// triangle's size, 3.6 mm)
@@ -192,12 +217,12 @@ func TestHazardMarksFromThePlanner(t *testing.T) {
 				}
 				on := q.Plume.Buoyancy().Onset
 				a := p.Request.Exit.ToCell(geometry.JetPoint{X: on})
-				// not beyond a capturing collector, nor outside the walls
+				// not beyond a capturing collector, nor outside the walls (a site limit is not a wall)
 				col := p.Request.Cell.Collector
 				if col != nil && q.Capture != planner.Blocked && on >= r3.Dot(r3.Sub(col.Inlet, p.Request.Exit.Exit), p.Request.Exit.Axis()) {
 					continue
 				}
-				if p.Request.Cell.Bounded() && !p.Request.Cell.Contains(orb.Point{a.X, a.Y}) {
+				if p.Request.Cell.Bounded() && p.Request.Cell.Kind != geometry.OutdoorPad && !p.Request.Cell.Contains(orb.Point{a.X, a.Y}) {
 					continue
 				}
 				reports = append(reports, pt(a.X, a.Y))
