@@ -228,3 +228,39 @@ func TestCoaxialSecondaryDiameter(t *testing.T) {
 		}
 	}
 }
+
+// TestSlowJetLevels checks a jet below the ARP 876 tables (Uj/c0 < 0.40):
+// noise warns on standard error and in its JSON that the levels are
+// extrapolated, plan warns for the point, and an NPR barely above 1 (no
+// jet at all) is refused as implausible.
+func TestSlowJetLevels(t *testing.T) {
+	// NPR 1.01 unheated: Mj = sqrt(5·(1.01^(1/3.5) − 1)) ≈ 0.12, Uj/c0 ≈ 0.12
+	// (isentropic relations, DERIVED), below 10^−0.4 ≈ 0.40 (ARP 876 tables,
+	// as internal/acoustics states them)
+	slow := []string{"noise", "--diameter", "50.8mm", "--npr", "1.01", "--temperature-ratio", "1", "--distance", "5m"}
+	_, errOut, code := arc(t, slow...)
+	if code != exitOK || !strings.Contains(errOut, "warning: Uj/c0 = 0.12 is outside the ARP 876 tables") || !strings.Contains(errOut, "extrapolated") {
+		t.Errorf("noise, slow jet: exit %d, stderr %q; want 0 and a warning", code, errOut)
+	}
+	out, _, code := arc(t, append(slow, "--format", "json")...)
+	if code != exitOK || !strings.Contains(out, `"notes"`) || !strings.Contains(out, "extrapolated") {
+		t.Errorf("noise --format json, slow jet: exit %d, no note:\n%s", code, out)
+	}
+	for _, npr := range []string{"1.0000001", "1.0005"} {
+		_, errOut, code := arc(t, "noise", "--diameter", "50.8mm", "--npr", npr, "--temperature-ratio", "1", "--distance", "5m")
+		if code != exitUsage || !strings.Contains(errOut, "implausible") {
+			t.Errorf("noise --npr %s: exit %d, %q; want %d, implausible", npr, code, errOut, exitUsage)
+		}
+	}
+	dir := t.TempDir()
+	path := demoEdit(t, dir, "anechoic-model-jet", "npr: 1.28", "npr: 1.0000001")
+	at := fmt.Sprintf("%s:%d: ", path, lineOf(t, path, "npr: 1.0000001"))
+	if _, errOut, code := arc(t, "validate", path); code != exitError || !strings.Contains(errOut, at) || !strings.Contains(errOut, "implausible") {
+		t.Errorf("validate, NPR 1.0000001: exit %d, %q; want %d at %s", code, errOut, exitError, at)
+	}
+	path = demoEdit(t, dir, "anechoic-model-jet", "npr: 1.28", "npr: 1.01")
+	out, errOut, code = arc(t, "plan", path)
+	if code != exitOK || !strings.Contains(out, "is outside the ARP 876 tables") || !strings.Contains(out, "extrapolated") {
+		t.Errorf("plan, a slow point: exit %d, no warning\n%s%s", code, out, errOut)
+	}
+}

@@ -24,10 +24,10 @@ func TestPlumeImplausibleFlags(t *testing.T) {
 		flag string
 		want string
 	}{
-		{"npr huge", append(base, "--npr", "1e304"), "--npr", "want above 1 up to 50"},
+		{"npr huge", append(base, "--npr", "1e304"), "--npr", "want 1.001 to 50"},
 		{"npr NaN", append(base, "--npr", "NaN"), "--npr", "finite"},
 		{"npr Inf", append(base, "--npr", "+Inf"), "--npr", "finite"},
-		{"npr below one", append(base, "--npr", "0.9"), "--npr", "above 1"},
+		{"npr below one", append(base, "--npr", "0.9"), "--npr", "want 1.001 to 50"},
 		{"diameter huge", append(base, "--diameter", "1e200m"), "--diameter", "1.0 mm to 10.0 m"},
 		{"diameter NaN", append(base, "--diameter", "NaNmm"), "--diameter", "want a length"},
 		{"temperature ratio", append(base, "--temperature-ratio", "1e300"), "--temperature-ratio", "0.5 to 12"},
@@ -37,7 +37,7 @@ func TestPlumeImplausibleFlags(t *testing.T) {
 		{"ambient pressure", append(base, "--ambient-pressure", "1e9Pa"), "--ambient-pressure", "30.00 kPa to 130.00 kPa"},
 		{"velocity limit", append(base, "--velocity-limit", "1e9m/s"), "--velocity-limit", "implausible"},
 		{"profile distance", append(base, "--at", "1e300m"), "--at", "implausible"},
-		{"secondary npr", append(coax, "--secondary-npr", "1e100"), "--secondary-npr", "want above 1 up to 50"},
+		{"secondary npr", append(coax, "--secondary-npr", "1e100"), "--secondary-npr", "want 1.001 to 50"},
 		{"design Mach", []string{"plume", "--nozzle", "cd", "--design-mach", "40", "--diameter", "2in", "--npr", "3", "--temperature-ratio", "1"}, "--design-mach", "above 1 up to 5"},
 	}
 	for _, tt := range tests {

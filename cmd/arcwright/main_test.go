@@ -137,7 +137,7 @@ func TestPlumeErrors(t *testing.T) {
 		code int
 		want string
 	}{
-		{"NPR below 1", append(base, "--npr", "0.8"), exitUsage, `"--npr" flag: the nozzle pressure ratio 0.8 is implausible; want above 1 up to 50`},
+		{"NPR below 1", append(base, "--npr", "0.8"), exitUsage, `"--npr" flag: the nozzle pressure ratio 0.8 is implausible; want 1.001 to 50`},
 		{"temperature on a length", []string{"plume", "--diameter", "15C", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `invalid argument "15C" for "--diameter" flag: want a length, got "15C"`},
 		{"unknown unit", []string{"plume", "--diameter", "5 furlongs", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `"--diameter"`},
 		{"negative diameter", []string{"plume", "--diameter", "-5mm", "--npr", "1.5", "--temperature-ratio", "1"}, exitUsage, `"--diameter" flag: the nozzle dimension -5.0 mm is implausible`},

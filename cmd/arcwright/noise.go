@@ -108,6 +108,9 @@ Exit status: 0 on success, 1 on bad input, 2 on a bad command line.`,
 	return c
 }
 
+// extrapolatedWords follow the note of a jet outside the ARP 876 tables.
+const extrapolatedWords = "The levels are extrapolated beyond the model's data; the stated uncertainty is widened for it, and is itself a guess there."
+
 // noiseCaution is printed under every text prediction.
 const noiseCaution = "The levels are estimates with the stated uncertainty. Hearing protection and exclusion zones follow the facility's procedures, local codes and licensed practice."
 
@@ -186,8 +189,23 @@ func runNoise(o *NoiseOptions, fs *pflag.FlagSet, w, stderr io.Writer) error {
 		near = fmt.Sprintf("the receiver is %.3g Dj from the source, short of the %.0f Dj of the acoustic far field (common practice): the prediction is a far-field one and near-field levels differ.", ratio, farField)
 		fmt.Fprintln(stderr, "arcwright: warning: "+near)
 	}
+	// a jet outside the ARP 876 tables: the levels are extrapolated (the
+	// stated uncertainty includes the source's widening for it)
+	var notes []string
+	if e := p.Exit(); !src.Coaxial() && !acoustics.ARP876InRange(e.Velocity, atm.SpeedOfSound()) {
+		for _, n := range src.Notes() {
+			if strings.HasPrefix(n, "Uj/c0") {
+				n += " " + extrapolatedWords
+				notes = append(notes, n)
+				fmt.Fprintln(stderr, "arcwright: warning: "+n)
+			}
+		}
+	}
 	if o.Format == "json" {
-		return export.NoiseJSON(w, best.l, src.Method(), bands, best.levels)
+		if near != "" {
+			notes = append(notes, near)
+		}
+		return export.NoiseJSON(w, best.l, src.Method(), bands, best.levels, notes...)
 	}
 	return noiseText(w, src, p, best.l, best.levels, best.r, best.th, best.xs, near, o, atm, sys)
 }
@@ -262,6 +280,11 @@ func noiseText(w io.Writer, src *acoustics.NoiseSource, p *jet.Plume, l acoustic
 	tw.Flush()
 	fmt.Fprintln(w, "\nMicrophone: "+acoustics.MicrophoneAdvice(l.OASPL, fTop))
 	notes := src.Notes()
+	for i, n := range notes {
+		if strings.HasPrefix(n, "Uj/c0") && !src.Coaxial() {
+			notes[i] = n + " " + extrapolatedWords
+		}
+	}
 	if near != "" {
 		notes = append(notes, near)
 	}

@@ -16,6 +16,9 @@ type noiseDoc struct {
 	Uncertainty num            `json:"uncertainty_db"`
 	Method      string         `json:"method"`
 	Spectrum    []noiseBandDoc `json:"spectrum"`
+	// Notes say where the prediction is weaker than its method's range
+	// (a jet outside the tables, say); left out when there is none.
+	Notes []string `json:"notes,omitempty"`
 }
 
 type noiseBandDoc struct {
@@ -29,9 +32,9 @@ const levelDecimals = 2
 // NoiseJSON writes the noise command's prediction: the levels l at one
 // receiver by the method named method (the source's
 // [acoustics.NoiseSource.Method]) and the band levels (dB) at the exact
-// midbands of bands. It
+// midbands of bands, with the notes (left out when none). It
 // returns an error when a level is not finite or the lengths differ.
-func NoiseJSON(w io.Writer, l acoustics.Levels, method string, bands []acoustics.Band, levels []float64) error {
+func NoiseJSON(w io.Writer, l acoustics.Levels, method string, bands []acoustics.Band, levels []float64, notes ...string) error {
 	if len(bands) != len(levels) {
 		return fmt.Errorf("export: %d bands but %d band levels", len(bands), len(levels))
 	}
@@ -47,6 +50,7 @@ func NoiseJSON(w io.Writer, l acoustics.Levels, method string, bands []acoustics
 		Uncertainty: num(l.Uncertainty),
 		Method:      method,
 		Spectrum:    make([]noiseBandDoc, len(bands)),
+		Notes:       notes,
 	}
 	for i, b := range bands {
 		d.Spectrum[i] = noiseBandDoc{Frequency: num(b.Centre), Level: num(roundTo(levels[i], levelDecimals))}

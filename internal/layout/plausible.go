@@ -20,8 +20,14 @@ const (
 	// MaxNPR is the largest nozzle pressure ratio (total over ambient
 	// pressure). Engine nozzles run below about 5 and model jets below
 	// about 10 (common practice); 50 leaves room for rocket-like rigs.
-	// The smallest is just above 1, where there is no flow.
 	MaxNPR = 50.0
+	// MinNPR is the smallest nozzle pressure ratio: 1.001. At NPR 1 there
+	// is no flow; at 1.001 a jet at ambient temperature leaves at Mj ≈
+	// 0.038, about 13 m/s (isentropic relations, DERIVED), a few times a
+	// zone's velocity limit. Below it the jet is a draught, not a test
+	// condition, and its predicted levels are meaningless (a jet of
+	// 0.1 m/s at NPR 1.0000001 gave −172 dB).
+	MinNPR = 1.001
 	// MinTotalTemperature and MaxTotalTemperature bound a stream's total
 	// temperature, K: from a cryogenically cooled model jet (−123 °C) to
 	// above an afterburner's exhaust (about 2 000 K, common practice).
@@ -95,7 +101,7 @@ type Range struct {
 // Plausible ranges of the jet inputs, shared by the layout and the plume
 // command's flags.
 var (
-	NPRRange              = Range{What: "nozzle pressure ratio", Min: 1, Max: MaxNPR, MinOpen: true}
+	NPRRange              = Range{What: "nozzle pressure ratio", Min: MinNPR, Max: MaxNPR}
 	TotalTemperatureRange = Range{What: "total temperature", Min: MinTotalTemperature, Max: MaxTotalTemperature, Unit: "K"}
 	TemperatureRatioRange = Range{What: "total-temperature ratio", Min: MinTemperatureRatio, Max: MaxTemperatureRatio}
 	GammaRange            = Range{What: "ratio of specific heats", Min: 1, Max: 5.0 / 3, MinOpen: true}

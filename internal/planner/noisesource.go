@@ -3,6 +3,7 @@ package planner
 import (
 	"arcwright/internal/acoustics"
 	"arcwright/internal/jet"
+	"strings"
 )
 
 // JetNoiseSource predicts the noise of plume p in atm over the default
@@ -46,6 +47,25 @@ func JetNoiseSource(p *jet.Plume, atm acoustics.Atmosphere) (*acoustics.NoiseSou
 	}
 	s, err := acoustics.NewCoaxialSource(mixed, prim, sec, atm, acoustics.NoiseBands(mixed, prim, sec))
 	return s, xs, err
+}
+
+// slowJetWarnings returns a warning for each single-stream point whose
+// jet is outside the ARP 876 tables (Uj/c0 below 0.40 or above 2.51): its
+// levels are extrapolated. The source's stated uncertainty already
+// includes the widening for it.
+func (ck *checker) slowJetWarnings() []string {
+	var w []string
+	for k, s := range ck.noise.sources {
+		if s == nil || s.Coaxial() {
+			continue
+		}
+		for _, n := range s.Notes() {
+			if strings.HasPrefix(n, "Uj/c0") {
+				w = append(w, ck.points[k].Name+": "+n+" Its levels are extrapolated beyond the model's data; their stated uncertainty is widened for it, and is itself a guess there.")
+			}
+		}
+	}
+	return w
 }
 
 // coaxialNoiseWarnings returns the plan's warning that its coaxial points'

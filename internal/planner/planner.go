@@ -358,6 +358,7 @@ func (ck *checker) summarisePlan(plan *Plan, placed []placedArray) {
 	plan.Impingements = impingements(ck.req, ck.obstacles, ck.points)
 	ck.imps = plan.Impingements
 	plan.Warnings = append(append(append(append([]string(nil), ck.req.Notes...), ck.warnings(ck.atm)...), ck.noiseWarnings(plan)...), ck.coaxialNoiseWarnings()...)
+	plan.Warnings = append(plan.Warnings, ck.slowJetWarnings()...)
 }
 
 func indexOf(points []PointResult, name string) int {
