@@ -107,7 +107,7 @@ func TestLargeSite(t *testing.T) {
 	}
 	// a scale too large for the paper names the scale and the paper that fit
 	_, errOut, code := arc(t, "plan", filepath.Join("testdata", "large-site.yaml"), "--pdf", pdf, "--paper", "A4", "--scale", "1:500")
-	if code != exitError || !strings.Contains(errOut, "fits on A4") || !strings.Contains(errOut, "A1 paper holds it at 1:500") {
+	if code != exitError || !strings.Contains(errOut, "fits on A4") || !strings.Contains(errOut, "; or use A1, which holds it at 1:500") {
 		t.Errorf("got exit %d, stderr %q; want exit 1 naming the scale and the paper that fit", code, errOut)
 	}
 }

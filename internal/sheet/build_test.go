@@ -95,7 +95,7 @@ func TestBuildPaperAndScale(t *testing.T) {
 		{name: "smaller scale asked", plan: chamberPlan, opt: sheet.Options{Scale: 100}, paper: "A3", scale: 100},
 		{name: "non-standard scale asked", plan: chamberPlan, opt: sheet.Options{Scale: 75}, paper: "A3", scale: 75},
 		{name: "unknown paper", plan: chamberPlan, opt: sheet.Options{Paper: "A5"}, err: sheet.ErrUnknownPaper, errSubstr: []string{`"A5"`, "paper asked for", "A0", "ANSI D"}},
-		{name: "scale that does not fit", plan: chamberPlan, opt: sheet.Options{Scale: 20}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "1:20", "1:50 fits on A3", "A1 paper holds it at 1:20"}},
+		{name: "scale that does not fit", plan: chamberPlan, opt: sheet.Options{Scale: 20}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "1:20", "1:50 fits on A3", "1:50 fits on A3; or use A1, which holds it at 1:20"}},
 		{name: "negative scale", plan: chamberPlan, opt: sheet.Options{Scale: -50}, err: sheet.ErrScale, errSubstr: []string{"scale asked for", "not a standard scale"}},
 		{name: "odd scale", plan: chamberPlan, opt: sheet.Options{Scale: 7}, err: sheet.ErrScale, errSubstr: []string{"1:7", "not a standard scale", "1:75"}},
 		// one family of scales per sheet (review: 1" = 20' on a metric sheet printed "Scale 1:240")

@@ -122,16 +122,18 @@ func (b *builder) fitPlan(asked int, field string, aw, ah float64) (planFit, err
 
 // noFit returns the error for a plan that fits the paper at no scale (or
 // not at the one asked, asked > 0): it names the scale that fits this paper
-// and a larger paper that holds the plan at the scale asked (or the
-// smallest scale), cropped to its stations and nozzle (roi).
+// and, as a second way out, a larger paper that holds the plan at the
+// scale asked (or the smallest scale), cropped to its stations and nozzle
+// with room round them for labels (roi). It reports the stations' and
+// nozzle's own extents, without that room, beside the whole plan's.
 func (b *builder) noFit(what string, asked int, full, roi orb.Bound, aw, ah float64) error {
 	w, h := roi.Max[0]-roi.Min[0], roi.Max[1]-roi.Min[1]
 	paper := b.model.Paper
 	sys := b.req.Units
 	list := scalesFor(sys)
-	var out []string
+	var here, larger string
 	if s, ok := chooseScale(list, w, h, aw, ah); ok {
-		out = append(out, fmt.Sprintf("%s fits on %s", ScaleName(s, sys), paper.Name))
+		here = fmt.Sprintf("%s fits on %s", ScaleName(s, sys), paper.Name)
 	}
 	den := asked
 	if den == 0 {
@@ -142,12 +144,18 @@ func (b *builder) noFit(what string, asked int, full, roi orb.Bound, aw, ah floa
 			continue
 		}
 		if pw, ph := b.planArea(p); fits(w, h, pw, ph, den) {
-			out = append(out, fmt.Sprintf("%s paper holds it at %s", p.Name, ScaleName(den, sys)))
+			larger = fmt.Sprintf("use %s, which holds it at %s", p.Name, ScaleName(den, sys))
 			break
 		}
 	}
-	if len(out) == 0 {
-		out = append(out, "split the arrays over several layouts")
+	way := "split the arrays over several layouts"
+	switch {
+	case here != "" && larger != "":
+		way = here + "; or " + larger
+	case here != "":
+		way = here
+	case larger != "":
+		way = larger
 	}
 	verb := "does not fit"
 	if asked > 0 {
@@ -161,8 +169,11 @@ func (b *builder) noFit(what string, asked int, full, roi orb.Bound, aw, ah floa
 		}
 		return fmt.Sprintf("%.1f × %.1f m", w, h)
 	}
+	ex := b.req.Exit.Exit
+	works := b.extendWorks(orb.Bound{Min: orb.Point{ex.X, ex.Y}, Max: orb.Point{ex.X, ex.Y}})
 	return fmt.Errorf("%w: %s %s %s: the plan spans %s, its stations and nozzle alone %s; %s",
-		ErrScale, what, verb, paper.Name, size(full.Max[0]-full.Min[0], full.Max[1]-full.Min[1]), size(w, h), joinOr(out))
+		ErrScale, what, verb, paper.Name, size(full.Max[0]-full.Min[0], full.Max[1]-full.Min[1]),
+		size(works.Max[0]-works.Min[0], works.Max[1]-works.Min[1]), way)
 }
 
 // planArea returns the plan's drawing area on paper p, mm: the frame less

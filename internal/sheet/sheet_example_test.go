@@ -47,5 +47,5 @@ func ExampleWrite() {
 	fmt.Println(err)
 	// Output:
 	// %PDF-
-	// sheet: scale does not fit: the scale asked for, 1:50, is too large a scale for A4: the plan spans 12.8 × 10.8 m, its stations and nozzle alone 12.0 × 9.4 m; 1:100 fits on A4 or A3 paper holds it at 1:50
+	// sheet: scale does not fit: the scale asked for, 1:50, is too large a scale for A4: the plan spans 12.8 × 10.8 m, its stations and nozzle alone 10.0 × 7.4 m; 1:100 fits on A4; or use A3, which holds it at 1:50
 }
