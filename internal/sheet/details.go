@@ -156,15 +156,77 @@ func (v *planView) findDetails() []detail {
 		a, e := v.t.pt(d.ext.Min[0], d.ext.Min[1]), v.t.pt(d.ext.Max[0], d.ext.Max[1])
 		r := boundOf([]Pt{a, e})
 		v.shapes = append(v.shapes, rectShape(StyleDetail, r))
-		txt := "DETAIL " + d.letter
-		if !v.placeText(txt, FeatureLabel, "detail "+d.letter, sizeSmall+0.5, Pt{r.X, r.Y}, unit(Pt{-1, -1}, Pt{0, -1}), 0.5, featFar) {
-			v.notes = append(v.notes, fmt.Sprintf("Detail %s (%s) is outlined on the plan (no room for its letter).", d.letter, d.array))
-		}
+		v.callout(d.letter, r)
 	}
 	if len(out) > 0 {
 		v.notes = append(v.notes, fmt.Sprintf("%s: enlarged on the first sheet after this one.", plural(len(out), "detail")))
 	}
 	return out
+}
+
+// callout letters the outline r (page mm) of detail letter on the plan:
+// "DETAIL E" beside its top-left corner where there is room, else beside
+// another corner, else the letter alone beside a corner or just inside
+// one, and where the plan is full even there, the letter just inside the
+// top-left corner over what lies beneath: a detail sheet whose view the
+// plan does not call out cannot be found from the plan.
+func (v *planView) callout(letter string, r Rect) {
+	of := "detail " + letter
+	size := sizeSmall + 0.5
+	corners := []struct{ at, dir Pt }{
+		{Pt{r.X, r.Y}, unit(Pt{-1, -1}, Pt{0, -1})},
+		{Pt{r.Right(), r.Y}, unit(Pt{1, -1}, Pt{0, -1})},
+		{Pt{r.X, r.Bottom()}, unit(Pt{-1, 1}, Pt{0, 1})},
+		{Pt{r.Right(), r.Bottom()}, unit(Pt{1, 1}, Pt{0, 1})},
+	}
+	for _, txt := range []string{"DETAIL " + letter, letter} {
+		for _, c := range corners {
+			if v.placeText(txt, FeatureLabel, of, size, c.at, c.dir, 0.5, featFar) {
+				return
+			}
+		}
+	}
+	w, h := v.b.labelBox(letter, size)
+	for _, c := range corners {
+		in := Pt{c.at.X - c.dir.X*(w/2+0.6), c.at.Y - c.dir.Y*(h/2+0.6)}
+		if v.placeText(letter, FeatureLabel, of, size, in, Pt{-c.dir.X, -c.dir.Y}, 0, nil) {
+			return
+		}
+	}
+	// the plan is full round the outline: the first spot along its edges,
+	// inside or out, clear of every other label (over marks and lines if
+	// need be), else just inside its top-left corner
+	fr := v.frame.inset(0.8)
+	clamp := func(x, y float64) Rect {
+		return Rect{math.Max(fr.X, math.Min(x, fr.Right()-w)), math.Max(fr.Y, math.Min(y, fr.Bottom()-h)), w, h}
+	}
+	box := clamp(r.X+0.4, r.Y+0.4)
+	free := func(c Rect) bool {
+		for _, l := range v.labels {
+			if l.Box().Overlaps(c, -0.3) {
+				return false
+			}
+		}
+		return true
+	}
+search:
+	for off := 0.0; off <= 12; off += 1.5 {
+		for _, c := range []Rect{
+			clamp(r.X-w-0.4-off, r.Y-h-0.4), clamp(r.X+0.4+off, r.Y+0.4), clamp(r.X+off, r.Y-h-0.4),
+			clamp(r.Right()-w-off, r.Y-h-0.4), clamp(r.Right()+0.4, r.Y+off), clamp(r.X-w-0.4, r.Y+off),
+			clamp(r.X+off, r.Bottom()+0.4), clamp(r.Right()-w-0.4-off, r.Bottom()-h-0.4),
+		} {
+			if free(c) {
+				box = c
+				break search
+			}
+		}
+	}
+	v.pl.mark(box)
+	// its anchor: the point of the outline nearest the letter
+	at := Pt{math.Max(r.X, math.Min(box.X+w/2, r.Right())), math.Max(r.Y, math.Min(box.Y+h/2, r.Bottom()))}
+	v.labels = append(v.labels, Label{Text: letter, Kind: FeatureLabel, For: of, X: box.X, Y: box.Y, W: w, H: h,
+		Size: size, Anchor: at, View: v.viewName()})
 }
 
 // detailView draws detail d in the frame r: the plan's drawing at the
@@ -228,8 +290,9 @@ func (b *builder) detailView(d detail, r Rect) (*planView, []Label, []*planner.S
 
 // shownRuns names the stations a detail shows, in plan order, neighbours
 // of one array as a run: "A-01 to, R-08"; runs past what
-// fits in w mm at the title's size are summed up as "and 4 more".
-func (b *builder) shownRuns(ss []*planner.Station, w float64, lead string) string {
+// fits in w mm between lead and tail at the title's size are summed up as
+// "and 4 more" (the first run stays).
+func (b *builder) shownRuns(ss []*planner.Station, w float64, lead, tail string) string {
 	var runs []string
 	for i := 0; i < len(ss); {
 		j := i + 1
@@ -247,7 +310,7 @@ func (b *builder) shownRuns(ss []*planner.Station, w float64, lead string) strin
 		i = j
 	}
 	out := strings.Join(runs, ", ")
-	for k := len(runs) - 1; k > 0 && b.m.width(clean(lead+out), sizeBody, true) > w; k-- {
+	for k := len(runs) - 1; k > 0 && b.m.width(clean(lead+out+tail), sizeBody, true) > w; k-- {
 		n := 0
 		for _, r := range runs[k:] {
 			n++
@@ -260,8 +323,27 @@ func (b *builder) shownRuns(ss []*planner.Station, w float64, lead string) strin
 	return out
 }
 
+// detailTitleMin is the width a detail's title may take beside a narrower
+// detail where the row has room, mm.
+const detailTitleMin = 60.0
+
+// detailTitle returns the lines of detail d's title within w mm: its
+// letter, the stations it shows (shown; summed up where they would not fit
+// on one line) and its scale, wrapped where even that is too wide.
+func (b *builder) detailTitle(d detail, shown []*planner.Station, w float64) []string {
+	lead := "DETAIL " + d.letter + " — "
+	tail := ", scale " + ScaleName(d.scale, b.req.Units)
+	what := d.array
+	if len(shown) > 0 {
+		what = b.shownRuns(shown, w, lead, tail)
+	}
+	return b.m.wrap(clean(lead+what+tail), w, sizeBody, true)
+}
+
 // details lays out the detail views on the flow's sheets, side by side
-// where they fit, each with its title.
+// where they fit, each with its title above it, within its width (or
+// within detailTitleMin beside a narrow one, the next detail then
+// starting after the title).
 func (f *flow) details(ds []detail) {
 	if len(ds) == 0 {
 		return
@@ -270,32 +352,44 @@ func (f *flow) details(ds []detail) {
 	f.heading("DETAILS — arrays too dense to label at the plan's scale, enlarged; each is outlined and lettered on the plan", 40)
 	x := f.area.X
 	rowH := 0.0
+	lh := lineHeight(sizeBody)
 	for _, d := range ds {
 		w := math.Min(detailMaxW, (d.ext.Max[0]-d.ext.Min[0])*1000/float64(d.scale)+2*viewPad)
 		h := math.Min(detailMaxH, (d.ext.Max[1]-d.ext.Min[1])*1000/float64(d.scale)+2*viewPad)
-		titleH := lineHeight(sizeBody) + 1
 		if x > f.area.X && x+w > f.area.Right() {
 			x = f.area.X
 			f.y += rowH + 3
 			rowH = 0
 		}
-		if f.room() < h+titleH {
-			f.newPage()
-			x, rowH = f.area.X, 0
+		// the title's lines depend on the stations the view shows, which
+		// depend on the frame's size alone: lay the view out again in the
+		// rare case the title needs more lines than assumed
+		for lines := 1; ; {
+			titleH := float64(lines)*lh + 1
+			if f.room() < h+titleH {
+				f.newPage()
+				x, rowH = f.area.X, 0
+			}
+			tw := math.Max(w, math.Min(detailTitleMin, f.area.Right()-x))
+			// the title names the stations the detail shows, which may be
+			// more than the run it was drawn for
+			v, labels, shown := b.detailView(d, Rect{x, f.y + titleH, w, h})
+			tl := b.detailTitle(d, shown, tw)
+			if len(tl) > lines {
+				lines = len(tl)
+				continue
+			}
+			used := w
+			for i, s := range tl {
+				f.page.Texts = append(f.page.Texts, Text{X: x, Y: f.y + capHeight(sizeBody) + 0.3 + float64(i)*lh, Size: sizeBody, Bold: true, Text: s})
+				used = math.Max(used, b.m.width(s, sizeBody, true))
+			}
+			f.page.Views = append(f.page.Views, View{Name: v.viewName(), Frame: v.frame, Scale: d.scale, Shapes: cropShapes(v.shapes, v.frame)})
+			f.page.Labels = append(f.page.Labels, labels...)
+			x += used + 4
+			rowH = math.Max(rowH, h+titleH)
+			break
 		}
-		// the title names the stations the detail shows, which may be more
-		// than the run it was drawn for
-		v, labels, shown := b.detailView(d, Rect{x, f.y + titleH, w, h})
-		what := d.array
-		if len(shown) > 0 {
-			what = b.shownRuns(shown, math.Max(w, detailMaxW), "DETAIL "+d.letter+" — ")
-		}
-		f.page.Texts = append(f.page.Texts, Text{X: x, Y: f.y + capHeight(sizeBody) + 0.3, Size: sizeBody, Bold: true,
-			Text: clean(fmt.Sprintf("DETAIL %s — %s, scale %s", d.letter, what, ScaleName(d.scale, b.req.Units)))})
-		f.page.Views = append(f.page.Views, View{Name: v.viewName(), Frame: v.frame, Scale: d.scale, Shapes: cropShapes(v.shapes, v.frame)})
-		f.page.Labels = append(f.page.Labels, labels...)
-		x += w + 4
-		rowH = math.Max(rowH, h+titleH)
 	}
 	f.y += rowH + 4
 }

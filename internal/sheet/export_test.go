@@ -9,3 +9,6 @@ func TextWidth(t Text) float64 { return textMeter.width(t.Text, t.Size, t.Bold) 
 
 // LineHeight returns the line height of text of size pt, mm.
 func LineHeight(size float64) float64 { return lineHeight(size) }
+
+// SizeBody is the size of table titles and panel text, pt.
+const SizeBody = sizeBody

@@ -26,11 +26,21 @@ const (
 	cellPadY = 0.6
 )
 
-// layoutColumns returns the column widths of t within w (mm): each column
-// as wide as its widest cell (headings may wrap at spaces), the flexible
-// columns sharing what is left; when the fixed columns alone are too wide
-// they shrink in proportion and their cells wrap.
-func (b *builder) layoutColumns(t *tableSpec, w, size float64) []float64 {
+// sizeTableMin is the smallest size a table shrinks to, pt, to fit the
+// frame's width before its longest words would overflow their columns
+// (about 1.8 mm capitals, a size that still reads on a print: common
+// practice for the notes of drawings is no smaller).
+const sizeTableMin = 5.0
+
+// layoutColumns returns the column widths of t within w (mm) at size pt,
+// and whether every column holds its longest word: each column as wide as
+// its widest cell (headings may wrap at spaces), a flexible column at
+// least 30 mm where the width allows, the flexible columns sharing what is
+// left in proportion to what they lack; when that is too wide, each column
+// gives up width in proportion to what it may give, down to its longest
+// word, and its cells wrap. When even the longest words do not fit, the
+// columns shrink in proportion and it reports false.
+func (b *builder) layoutColumns(t *tableSpec, w, size float64) ([]float64, bool) {
 	n := len(t.heads)
 	nat := make([]float64, n)  // natural width (longest cell on one line)
 	word := make([]float64, n) // longest heading word
@@ -44,46 +54,64 @@ func (b *builder) layoutColumns(t *tableSpec, w, size float64) []float64 {
 			nat[i] = math.Max(nat[i], b.m.width(c, size, false))
 		}
 	}
+	// 0.3 mm slack keeps a word exactly as wide as its column on one line
+	const pad = 2*cellPadX + 0.3
+	hi := make([]float64, n)   // one line
+	want := make([]float64, n) // before the fixed columns wrap
+	sumWant := 0.0
+	for i := range hi {
+		hi[i] = math.Max(nat[i], word[i]) + pad
+		want[i] = hi[i]
+		if t.flex[i] {
+			want[i] = math.Min(hi[i], math.Max(word[i]+pad, 30))
+		}
+		sumWant += want[i]
+	}
 	ws := make([]float64, n)
-	fixed, flexNat, nflex := 0.0, 0.0, 0
-	for i := range ws {
-		// 0.3 mm slack keeps a word exactly as wide as its column on one line
-		ws[i] = math.Max(nat[i], word[i]) + 2*cellPadX + 0.3
-		if t.flex[i] {
-			ws[i] = math.Max(word[i]+2*cellPadX, math.Min(ws[i], 25))
-			flexNat += math.Max(nat[i], word[i]) + 2*cellPadX
-			nflex++
-		} else {
-			fixed += ws[i]
-		}
-	}
-	left := w - fixed
-	if nflex == 0 {
-		if left < 0 {
-			for i := range ws {
-				ws[i] *= w / fixed
-			}
-		}
-		return ws
-	}
-	minFlex := 30.0 * float64(nflex)
-	if left < minFlex {
-		f := math.Max(0.3, (w-minFlex)/fixed)
+	if sumWant <= w {
+		copy(ws, want)
+		lack := 0.0
 		for i := range ws {
-			if !t.flex[i] {
-				ws[i] *= f
+			if t.flex[i] {
+				lack += hi[i] - want[i]
 			}
 		}
-		left = w - fixed*f
-	}
-	share := math.Min(left, flexNat)
-	for i := range ws {
-		if t.flex[i] {
-			full := math.Max(nat[i], word[i]) + 2*cellPadX
-			ws[i] = math.Max(ws[i], share*full/flexNat)
+		if extra := w - sumWant; lack > 0 {
+			f := math.Min(1, extra/lack)
+			for i := range ws {
+				if t.flex[i] {
+					ws[i] += f * (hi[i] - want[i])
+				}
+			}
 		}
+		return ws, true
 	}
-	return ws
+	// the narrowest each column goes: its longest word
+	lo := make([]float64, n)
+	sumLo := 0.0
+	for i := range lo {
+		lw := word[i]
+		for _, r := range t.rows {
+			if i < len(r) {
+				for _, wd := range splitWords(r[i]) {
+					lw = math.Max(lw, b.m.width(wd, size, false))
+				}
+			}
+		}
+		lo[i] = math.Min(lw+pad, want[i])
+		sumLo += lo[i]
+	}
+	if sumLo > w {
+		for i := range ws {
+			ws[i] = lo[i] * w / sumLo
+		}
+		return ws, false
+	}
+	f := (w - sumLo) / (sumWant - sumLo)
+	for i := range ws {
+		ws[i] = lo[i] + f*(want[i]-lo[i])
+	}
+	return ws, true
 }
 
 // splitWords splits s at spaces.
@@ -123,13 +151,12 @@ type laidTable struct {
 	rows  []Row
 	headH float64 // heading row, mm
 	tw    float64 // width, mm
+	size  float64 // text size, pt
 }
 
 // layTable sizes the columns of t within w (or its own largest width) and
 // wraps its cells.
 func (b *builder) layTable(t tableSpec, w float64) *laidTable {
-	sz := sizeTable
-	lh := lineHeight(sz)
 	if t.maxW > 0 {
 		w = math.Min(w, t.maxW)
 	}
@@ -141,7 +168,15 @@ func (b *builder) layTable(t tableSpec, w float64) *laidTable {
 			r[i] = clean(r[i])
 		}
 	}
-	ws := b.layoutColumns(&t, w, sz)
+	// a table whose longest words do not fit the width at the usual size
+	// shrinks, down to the least legible size
+	sz := sizeTable
+	ws, ok := b.layoutColumns(&t, w, sz)
+	for !ok && sz > sizeTableMin {
+		sz = math.Max(sizeTableMin, sz-0.5)
+		ws, ok = b.layoutColumns(&t, w, sz)
+	}
+	lh := lineHeight(sz)
 	cols := make([]Column, len(ws))
 	headLines := 1
 	tw := 0.0
@@ -161,14 +196,14 @@ func (b *builder) layTable(t tableSpec, w float64) *laidTable {
 		}
 		rows[ri] = Row{Cells: cells, H: float64(n)*lh + 2*cellPadY}
 	}
-	return &laidTable{t: t, cols: cols, rows: rows, headH: headH, tw: tw}
+	return &laidTable{t: t, cols: cols, rows: rows, headH: headH, tw: tw, size: sz}
 }
 
 // placeTable places lt on the flow (see table).
 func (f *flow) placeTable(lt *laidTable) {
 	b := f.b
 	t, cols, rows, headH, tw := lt.t, lt.cols, lt.rows, lt.headH, lt.tw
-	sz := sizeTable
+	sz := lt.size
 	lh := lineHeight(sz)
 	lanes := max(1, int((f.area.W+laneGap)/(tw+laneGap)))
 	title := func(s string) ([]string, float64) {
