@@ -291,9 +291,10 @@ func (b *builder) detailView(d detail, r Rect) (*planView, []Label, []*planner.S
 // shownRuns names the stations a detail shows, in plan order, neighbours
 // of one array as a run: "A-01 to, R-08"; runs past what
 // fits in w mm between lead and tail at the title's size are summed up as
-// "and 4 more" (the first run stays).
+// "and 24 more" (stations; the first run stays).
 func (b *builder) shownRuns(ss []*planner.Station, w float64, lead, tail string) string {
 	var runs []string
+	var count []int // stations in each run
 	for i := 0; i < len(ss); {
 		j := i + 1
 		for j < len(ss) && ss[j].Array == ss[i].Array && ss[j].Index == ss[j-1].Index+1 {
@@ -301,22 +302,19 @@ func (b *builder) shownRuns(ss []*planner.Station, w float64, lead, tail string)
 		}
 		switch j - i {
 		case 1:
-			runs = append(runs, ss[i].ID)
+			runs, count = append(runs, ss[i].ID), append(count, 1)
 		case 2:
-			runs = append(runs, ss[i].ID, ss[i+1].ID)
+			runs, count = append(runs, ss[i].ID, ss[i+1].ID), append(count, 1, 1)
 		default:
-			runs = append(runs, ss[i].ID+" to "+ss[j-1].ID)
+			runs, count = append(runs, ss[i].ID+" to "+ss[j-1].ID), append(count, j-i)
 		}
 		i = j
 	}
 	out := strings.Join(runs, ", ")
 	for k := len(runs) - 1; k > 0 && b.m.width(clean(lead+out+tail), sizeBody, true) > w; k-- {
 		n := 0
-		for _, r := range runs[k:] {
-			n++
-			if strings.Contains(r, " to ") {
-				n++ // at least two stations
-			}
+		for _, c := range count[k:] {
+			n += c
 		}
 		out = strings.Join(runs[:k], ", ") + fmt.Sprintf(" and %d more", n)
 	}

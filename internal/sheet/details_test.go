@@ -1,11 +1,13 @@
 package sheet_test
 
 import (
+	"fmt"
 	"regexp"
 	"strconv"
 	"strings"
 	"testing"
 
+	"arcwright/internal/planner"
 	"arcwright/internal/sheet"
 )
 
@@ -79,4 +81,30 @@ func covers(title, id string) bool {
 		}
 	}
 	return false
+}
+
+// TestShownRunsCountsStations: a detail's title that sums up the runs it
+// has no room for counts their stations, not the runs.
+func TestShownRunsCountsStations(t *testing.T) {
+	var ss []*planner.Station
+	add := func(array string, n int) {
+		for i := 1; i <= n; i++ {
+			ss = append(ss, &planner.Station{ID: fmt.Sprintf("%s-%02d", array, i), Array: array, Index: i})
+		}
+	}
+	add("A", 6)
+	add("N", 16)
+	add("R", 6)
+	lead, tail := "DETAIL C — ", ", scale 1:100"
+	for _, tt := range []struct {
+		w    float64
+		want string
+	}{
+		{500, "A-01 to A-06, N-01 to N-16, R-01 to R-06"},
+		{40, "A-01 to A-06 and 22 more"}, // 16 + 6 stations in two runs
+	} {
+		if got := sheet.ShownRuns(ss, tt.w, lead, tail); got != tt.want {
+			t.Errorf("width %g mm: got %q, want %q", tt.w, got, tt.want)
+		}
+	}
 }

@@ -1,5 +1,7 @@
 package sheet
 
+import "arcwright/internal/planner"
+
 // textMeter measures the texts of the tests.
 var textMeter = newMeter()
 
@@ -12,3 +14,9 @@ func LineHeight(size float64) float64 { return lineHeight(size) }
 
 // SizeBody is the size of table titles and panel text, pt.
 const SizeBody = sizeBody
+
+// ShownRuns names the stations of a detail within w mm (see shownRuns).
+func ShownRuns(ss []*planner.Station, w float64, lead, tail string) string {
+	b := &builder{m: textMeter}
+	return b.shownRuns(ss, w, lead, tail)
+}
