@@ -2,9 +2,11 @@ package main
 
 import (
 	"fmt"
+	"io"
 	"os"
 	"path/filepath"
 	"strings"
+	"syscall"
 	"testing"
 )
 
@@ -262,5 +264,38 @@ func TestSlowJetLevels(t *testing.T) {
 	out, errOut, code = arc(t, "plan", path)
 	if code != exitOK || !strings.Contains(out, "is outside the ARP 876 tables") || !strings.Contains(out, "extrapolated") {
 		t.Errorf("plan, a slow point: exit %d, no warning\n%s%s", code, out, errOut)
+	}
+}
+
+// TestPipeWithoutReader checks that plan refuses at once a named pipe that
+// nothing reads (it waited forever) and writes none of the run's outputs,
+// and writes through a pipe that is read.
+func TestPipeWithoutReader(t *testing.T) {
+	dir := t.TempDir()
+	layoutPath := copyDemo(t, dir)
+	fifo := filepath.Join(dir, "ff")
+	if err := syscall.Mkfifo(fifo, 0o600); err != nil {
+		t.Fatal(err)
+	}
+	pdf := filepath.Join(dir, "ok.pdf")
+	_, errOut, code := arc(t, "plan", layoutPath, "--pdf", pdf, "--as-built-template", fifo)
+	if code != exitUsage || !strings.Contains(errOut, "--as-built-template "+fifo+" is a pipe that nothing reads") {
+		t.Errorf("pipe without a reader: exit %d, %q; want %d and the flag", code, errOut, exitUsage)
+	}
+	if _, err := os.Stat(pdf); err == nil {
+		t.Errorf("the run failed but wrote %s", pdf)
+	}
+	// with a reader (opened first, without waiting; the template fits the
+	// pipe's buffer) the template goes through
+	r, err := os.OpenFile(fifo, os.O_RDONLY|syscall.O_NONBLOCK, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer r.Close()
+	if _, errOut, code := arc(t, "plan", layoutPath, "--as-built-template", fifo); code != exitOK {
+		t.Fatalf("pipe with a reader: exit %d, %q", code, errOut)
+	}
+	if b, err := io.ReadAll(r); err != nil || !strings.HasPrefix(string(b), "id,") {
+		t.Errorf("pipe with a reader: got %.40q, %v", b, err)
 	}
 }

@@ -263,6 +263,9 @@ func runPlan(o *PlanOptions, w io.Writer) error {
 	}
 	// every file is written to a temporary first: a failure leaves none
 	if err := export.WriteFiles(outs, ins, w); err != nil {
+		if errors.Is(err, export.ErrNoReader) {
+			return usageError{err} // a destination of the command line
+		}
 		if (errors.Is(err, sheet.ErrScale) || errors.Is(err, sheet.ErrPaperRoom)) && o.Scale == "" && o.Paper == "" {
 			// the layout's paper and scale: at their line and key
 			return layout.LocateSheet(p.Request, err)

@@ -25,6 +25,9 @@ var (
 	ErrSamePath = errors.New("export: an output would overwrite another file of the run")
 	// ErrNotRegular: a destination is a directory, a device or a socket.
 	ErrNotRegular = errors.New("export: not a file that can be written")
+	// ErrNoReader: a destination is a pipe that no process reads; writing
+	// it would wait forever.
+	ErrNoReader = errors.New("export: a pipe with no reader")
 )
 
 // checkPlan returns an error unless p can be written: p and its request are

@@ -66,7 +66,11 @@ type destination struct {
 //     exist yet: the target is written, and the link stays;
 //   - "-" ([Stdout]): standard output, at most one output;
 //   - the null device (os.DevNull): nothing is written;
-//   - a named pipe: written through, after every file is in place.
+//   - a pipe (a named pipe, or /dev/fd/N of a shell's process
+//     substitution): written through, after every file is in place. It is
+//     opened without waiting, before any file is put in place: a pipe that
+//     no process reads gives an error wrapping [ErrNoReader] at once, and
+//     nothing is written.
 //
 // A directory, a device other than the null device, or a socket is
 // refused with an error wrapping [ErrNotRegular]. A path that is an input
@@ -132,6 +136,12 @@ func resolve(o Output) (destination, error) {
 	}
 	if o.Path == Stdout {
 		d.kind = toStdout
+		return d, nil
+	}
+	// a pipe, named or anonymous (a shell's process substitution gives
+	// /dev/fd/N, whose link text is not a path): written through
+	if fi, err := os.Stat(o.Path); err == nil && fi.Mode()&fs.ModeNamedPipe != 0 {
+		d.kind, d.target, d.info = toPipe, o.Path, fi
 		return d, nil
 	}
 	p := o.Path
@@ -274,6 +284,23 @@ func WriteFiles(outs []Output, ins []Input, stdout io.Writer) error {
 		}
 		temps = append(temps, tmp)
 	}
+	// pipes are opened before any file is put in place, without waiting:
+	// one that no process reads fails now, not after (or never)
+	pipes := make([]*os.File, len(dests))
+	defer func() {
+		for _, f := range pipes {
+			if f != nil {
+				_ = f.Close()
+			}
+		}
+	}()
+	for i, d := range dests {
+		if d.kind == toPipe {
+			if pipes[i], err = openPipe(d); err != nil {
+				return err
+			}
+		}
+	}
 	for i, d := range dests {
 		if temps[i] == "" {
 			continue
@@ -285,7 +312,7 @@ func WriteFiles(outs []Output, ins []Input, stdout io.Writer) error {
 		temps[i] = ""
 		syncDir(filepath.Dir(d.target))
 	}
-	for _, d := range dests {
+	for i, d := range dests {
 		switch d.kind {
 		case toStdout:
 			if stdout == nil {
@@ -295,11 +322,9 @@ func WriteFiles(outs []Output, ins []Input, stdout io.Writer) error {
 				return err
 			}
 		case toPipe:
-			f, err := os.OpenFile(d.target, os.O_WRONLY, 0)
-			if err != nil {
-				return fmt.Errorf("writing %s %s: %w", d.Label, d.Path, err)
-			}
-			err = writeStream(d, f)
+			f := pipes[i]
+			pipes[i] = nil
+			err := writeStream(d, f)
 			if cerr := f.Close(); err == nil && cerr != nil {
 				err = fmt.Errorf("writing %s %s: %w", d.Label, d.Path, cerr)
 			}
@@ -309,6 +334,24 @@ func WriteFiles(outs []Output, ins []Input, stdout io.Writer) error {
 		}
 	}
 	return nil
+}
+
+// openPipe opens the pipe of d for writing without waiting for a reader
+// (O_NONBLOCK: ENXIO when there is none), then makes writes wait for the
+// reader as usual.
+func openPipe(d destination) (*os.File, error) {
+	fd, err := syscall.Open(d.target, syscall.O_WRONLY|syscall.O_NONBLOCK|syscall.O_CLOEXEC, 0)
+	if errors.Is(err, syscall.ENXIO) {
+		return nil, destError(ErrNoReader, "%s %s is a pipe that nothing reads: start its reader first (or give a file name)", d.Label, d.Path)
+	}
+	if err != nil {
+		return nil, fmt.Errorf("writing %s %s: %w", d.Label, d.Path, err)
+	}
+	if err := syscall.SetNonblock(fd, false); err != nil {
+		_ = syscall.Close(fd)
+		return nil, fmt.Errorf("writing %s %s: %w", d.Label, d.Path, err)
+	}
+	return os.NewFile(uintptr(fd), d.target), nil
 }
 
 // writeStream writes d's content to w through a buffer.

@@ -5,6 +5,7 @@ package export_test
 import (
 	"bytes"
 	"errors"
+	"fmt"
 	"io"
 	"os"
 	"path/filepath"
@@ -145,17 +146,36 @@ func TestWriteFilesDestinations(t *testing.T) {
 			t.Errorf("%s: got %v, want ErrNotRegular", p, err)
 		}
 	}
-	// a named pipe is written through
-	got := make(chan string)
-	go func() {
-		b, _ := os.ReadFile(fifo)
-		got <- string(b)
-	}()
+	// a named pipe with no reader is refused at once, not waited on
+	if err := export.WriteFile(fifo, writeString("piped")); !errors.Is(err, export.ErrNoReader) {
+		t.Errorf("pipe without a reader: got %v, want ErrNoReader", err)
+	}
+	// a named pipe with a reader is written through (the reader opens
+	// first, without waiting for a writer; the text fits the pipe's buffer)
+	r, err := os.OpenFile(fifo, os.O_RDONLY|syscall.O_NONBLOCK, 0)
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer r.Close()
 	if err := export.WriteFile(fifo, writeString("piped")); err != nil {
 		t.Fatal(err)
 	}
-	if s := <-got; s != "piped" {
-		t.Errorf("pipe: got %q, want %q", s, "piped")
+	if b, err := io.ReadAll(r); err != nil || string(b) != "piped" {
+		t.Errorf("pipe: got %q, %v, want %q", b, err, "piped")
+	}
+	// an anonymous pipe named by /dev/fd/N (a shell's process
+	// substitution) is written through too
+	pr, pw, err := os.Pipe()
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer pr.Close()
+	if err := export.WriteFile(fmt.Sprintf("/dev/fd/%d", pw.Fd()), writeString("substituted")); err != nil {
+		t.Errorf("/dev/fd pipe: %v", err)
+	}
+	pw.Close()
+	if b, _ := io.ReadAll(pr); string(b) != "substituted" {
+		t.Errorf("/dev/fd pipe: got %q, want %q", b, "substituted")
 	}
 	// "-" is standard output
 	var stdout bytes.Buffer
