@@ -52,9 +52,9 @@ func eachSheetSet(t *testing.T, f func(t *testing.T, m *sheet.Model)) {
 }
 
 // TestEverythingInsideTheFrame: on every sheet of every demo and review
-// layout, on small and large paper, every text line and every table (its
+// layout, on small and large paper, every text line, panel and table (its
 // title, its columns and each line of each cell) lies inside the drawing
-// border.
+// border, and every label inside its view's frame.
 func TestEverythingInsideTheFrame(t *testing.T) {
 	const tol = 0.05 // mm
 	eachSheetSet(t, func(t *testing.T, m *sheet.Model) {
@@ -67,6 +67,24 @@ func TestEverythingInsideTheFrame(t *testing.T) {
 					if out(tx.X, tx.X+w) || tx.Y < fr.Y-tol || tx.Y > fr.Bottom()+tol {
 						t.Errorf("sheet %d: text %q spans x %.1f to %.1f at y %.1f, outside the frame %v", pg.Number, ln, tx.X, tx.X+w, tx.Y, fr)
 					}
+				}
+			}
+			for _, pn := range pg.Panels {
+				if !fr.Contains(pn.Box) {
+					t.Errorf("sheet %d: panel %s at %v leaves the frame %v", pg.Number, pn.Name, pn.Box, fr)
+				}
+			}
+			views := map[string]sheet.Rect{}
+			for _, v := range pg.Views {
+				views[v.Name] = v.Frame
+			}
+			for _, l := range pg.Labels {
+				box, ok := views[l.View]
+				if !ok {
+					box = fr
+				}
+				if !box.Contains(l.Box()) {
+					t.Errorf("sheet %d: label %q at %v leaves its frame %v", pg.Number, l.Text, l.Box(), box)
 				}
 			}
 			for _, tb := range pg.Tables {
