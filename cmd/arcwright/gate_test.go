@@ -299,3 +299,50 @@ func TestPipeWithoutReader(t *testing.T) {
 		t.Errorf("pipe with a reader: got %.40q, %v", b, err)
 	}
 }
+
+// TestLayoutEdgeValues checks values at and past the edges of what a
+// layout accepts: the ambient range is inclusive alike in every unit, a hex
+// float is not a number a user writes, a crew time has a floor, contours
+// repeat within 0.1 dB, and a crew position inside an obstacle is flagged.
+func TestLayoutEdgeValues(t *testing.T) {
+	const demo = "hard-wall-exhaust-room"
+	for _, c := range []struct {
+		name string
+		repl []string
+		ok   bool   // validate exits 0
+		want string // in the output (errors or warnings), with the line of the key
+		key  string // a text on the line the message names
+	}{
+		// −60 °C is 213.15 K (the bound, inclusive in both units)
+		{"−60 C", []string{"temperature: 21 C", "temperature: -60 C"}, true, "", ""},
+		{"213.15 K", []string{"temperature: 21 C", "temperature: 213.15 K"}, true, "", ""},
+		{"−76 F", []string{"temperature: 21 C", "temperature: -76 F"}, true, "", ""},
+		{"+60 C", []string{"temperature: 21 C", "temperature: 60 C", "temperature: 45 C", "temperature: 80 C"}, true, "", ""},
+		{"333.15 K", []string{"temperature: 21 C", "temperature: 333.15 K", "temperature: 45 C", "temperature: 80 C"}, true, "", ""},
+		{"−60.1 C", []string{"temperature: 21 C", "temperature: -60.1 C"}, false, "implausible", "temperature: -60.1 C"},
+		{"213.1 K", []string{"temperature: 21 C", "temperature: 213.1 K"}, false, "implausible", "temperature: 213.1 K"},
+		{"hex float NPR", []string{"npr: 1.08", "npr: 0x1.2p0"}, false, "0x1.2p0", "npr: 0x1.2p0"},
+		{"hex float hours", []string{"hours: 2 h", "hours: 0x1p1 h"}, false, "0x1p1", "hours: 0x1p1 h"},
+		{"hex float far-field ratio", []string{"far_field_ratio: 15", "far_field_ratio: 0xF"}, false, "0xF", "far_field_ratio: 0xF"},
+		{"1e-300 h", []string{"hours: 2 h", "hours: 1e-300 h"}, false, "at least 1 s", "hours: 1e-300 h"},
+		{"1 s is the least", []string{"hours: 2 h", "hours: 0.0002778 h"}, true, "", ""},
+		{"contours 0.1 dB apart at most", []string{"reverberation_time: 1.8 s", "reverberation_time: 1.8 s\n  contours: [100 dB(A), 100.0000001 dB(A)]"}, false, "already in the list", "contours:"},
+		{"contours 0.2 dB apart", []string{"reverberation_time: 1.8 s", "reverberation_time: 1.8 s\n  contours: [100 dB(A), 100.2 dB(A)]"}, true, "", ""},
+		{"crew inside an obstacle", []string{"at: [600, 3500]", "at: [800, 2000]"}, true, "inside the obstacle burner rig", "at: [800, 2000]"},
+	} {
+		t.Run(c.name, func(t *testing.T) {
+			path := demoEdit(t, t.TempDir(), demo, c.repl...)
+			out, errOut, code := arc(t, "validate", path)
+			if (code == exitOK) != c.ok {
+				t.Errorf("exit %d, want ok %v\n%s%s", code, c.ok, out, errOut)
+			}
+			if c.want == "" {
+				return
+			}
+			at := fmt.Sprintf("%s:%d: ", path, lineOf(t, path, c.key))
+			if all := out + errOut; !strings.Contains(all, at) || !strings.Contains(all, c.want) {
+				t.Errorf("want %q… %q, got\n%s%s", at, c.want, out, errOut)
+			}
+		})
+	}
+}

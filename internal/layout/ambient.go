@@ -54,20 +54,20 @@ func (d *decoder) ambientSection(top *section) (planner.Ambient, bool) {
 	ok := s.isMap
 	if n := s.get("pressure"); n != nil {
 		p, good := d.pressure(n, s.field("pressure"))
-		if good && (p < MinPressure || p > MaxPressure) {
+		if good && !inside(p, MinPressure, MaxPressure) {
 			d.implausible(n, s.field("pressure"), "ambient pressure", units.FormatPressure(p, units.Metric), "30 kPa to 130 kPa",
 				units.Pressure, []string{"kPa", "hPa", "mbar", "psi", "inHg", "bar", "atm", "mmHg"},
-				func(v float64) bool { return v >= MinPressure && v <= MaxPressure })
+				func(v float64) bool { return inside(v, MinPressure, MaxPressure) })
 			good = false
 		}
 		a.Pressure, ok = p, ok && good
 	}
 	if n := s.get("temperature"); n != nil {
 		t, good := d.temperature(n, s.field("temperature"))
-		if good && (t < MinTemperature || t > MaxTemperature) {
+		if good && !inside(t, MinTemperature, MaxTemperature) {
 			d.implausible(n, s.field("temperature"), "ambient temperature", units.FormatTemperature(t, units.Metric), "-60 °C to +60 °C",
 				units.Temperature, []string{"C", "F", "K"},
-				func(v float64) bool { return v >= MinTemperature && v <= MaxTemperature })
+				func(v float64) bool { return inside(v, MinTemperature, MaxTemperature) })
 			good = false
 		}
 		a.Temperature, ok = t, ok && good

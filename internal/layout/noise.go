@@ -1,9 +1,9 @@
 package layout
 
 import (
+	"github.com/paulmach/orb"
 	"math"
 	"slices"
-	"strconv"
 	"strings"
 
 	"go.yaml.in/yaml/v3"
@@ -28,6 +28,14 @@ const (
 	// none: a full 8-hour shift, the reference of both the EU and the
 	// NIOSH limits (conservative).
 	DefaultCrewHours = 8.0
+	// MinCrewHours is the shortest daily time at a crew position, h: 1 s.
+	// A shorter time is a slip (1e-300 h), and the exposure of a second at
+	// any level a jet makes is below every action value.
+	MinCrewHours = 1.0 / 3600
+	// ContourResolution is how close two contour levels may be and still
+	// count as the same, dB: 0.1 dB, the sheet prints levels to 1 dB and
+	// a prediction is good to a few dB.
+	ContourResolution = 0.1
 )
 
 // noiseSection decodes noise: the room's absorption and extra contours.
@@ -73,9 +81,9 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 		v, ok := d.level(it, field, aWeighted)
 		switch {
 		case !ok:
-		case v == planner.ContourA:
-			d.errorf(ErrInvalid, it.Line, field, "%g dB(A) is always drawn: remove it from the list", v)
-		case slices.Contains(n.Contours, v):
+		case sameLevel(v, planner.ContourA):
+			d.errorf(ErrInvalid, it.Line, field, "%g dB(A) is always drawn (%g dB(A)): remove it from the list", v, planner.ContourA)
+		case slices.ContainsFunc(n.Contours, func(c float64) bool { return sameLevel(c, v) }):
 			d.errorf(ErrInvalid, it.Line, field, "%g dB(A) is already in the list: give each contour once", v)
 		default:
 			n.Contours = append(n.Contours, v)
@@ -83,6 +91,11 @@ func (d *decoder) noiseSection(top *section, ci *cellInfo) planner.Noise {
 	}
 	return n
 }
+
+// sameLevel reports whether contour levels a and b, dB, are the same to
+// ContourResolution (they round alike at 0.1 dB, or are closer than half
+// of it).
+func sameLevel(a, b float64) bool { return math.Abs(a-b) < ContourResolution/2+1e-9 }
 
 // crewSection decodes crew: where people stay during runs.
 func (d *decoder) crewSection(top *section, ci *cellInfo) []planner.Crew {
@@ -110,6 +123,13 @@ func (d *decoder) crewSection(top *section, ci *cellInfo) []planner.Crew {
 			}
 			c.At.Z = h
 			ok = ok && good
+		}
+		if n := s.get("at"); n != nil && ok {
+			for _, o := range ci.cell.Obstacles {
+				if o.Footprint.Contains(orb.Point{c.At.X, c.At.Y}) && o.ZMin < c.At.Z {
+					d.warnf(n.Line, s.field("at"), "crew position %s is inside the obstacle %s: no one can stand there; check its position", c.Name, o.Name)
+				}
+			}
 		}
 		if n := s.get("hours"); n != nil {
 			h, good := d.hours(n, s.field("hours"))
@@ -228,7 +248,7 @@ func (d *decoder) level(n *yaml.Node, field string, w weighting) (float64, bool)
 		t = strings.TrimSpace(strings.TrimSuffix(t, u.suffix))
 		break
 	}
-	v, err := strconv.ParseFloat(t, 64)
+	v, err := parseDecimal(t)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		d.errorf(ErrInvalid, n.Line, field, "want a level in dB, such as %s, got %q", example, s)
 		return 0, false
@@ -249,8 +269,8 @@ func (d *decoder) seconds(n *yaml.Node, field string) (float64, bool) {
 // followed by h or min; above 0 and at most 24 h.
 func (d *decoder) hours(n *yaml.Node, field string) (float64, bool) {
 	h, ok := d.duration(n, field, "hours per day, such as 2 h or 30 min", map[string]float64{"min": 1.0 / 60, "h": 1}, 1)
-	if ok && (h <= 0 || h > 24) {
-		d.errorf(ErrInvalid, n.Line, field, "want a time above 0 and at most 24 h per day, got %g h", h)
+	if ok && !inside(h, MinCrewHours, 24) {
+		d.errorf(ErrInvalid, n.Line, field, "want a time of at least 1 s and at most 24 h per day, got %g h", h)
 		return h, false
 	}
 	return h, ok
@@ -271,7 +291,7 @@ func (d *decoder) duration(n *yaml.Node, field, want string, scale map[string]fl
 			break
 		}
 	}
-	v, err := strconv.ParseFloat(t, 64)
+	v, err := parseDecimal(t)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		d.errorf(ErrInvalid, n.Line, field, "want %s, got %q", want, s)
 		return 0, false

@@ -74,7 +74,7 @@ func TestNoiseKeyErrors(t *testing.T) {
 		{"reverberation too short", "noise:\n  reverberation_time: 0.01 s\n", "noise.reverberation_time: the reverberation time 0.01 s gives an average absorption coefficient of 1 (Eyring) in this room; want 0.032 s to 14.8 s"},
 		{"reverberation too long", "noise:\n  reverberation_time: 20 s\n", "noise.reverberation_time: the reverberation time 20 s gives an average absorption coefficient of 0.0074"},
 		{"crew without place", "crew:\n  - name: desk\n", "crew[0].at: missing"},
-		{"crew hours", "crew:\n  - name: desk\n    at: [1, 1]\n    hours: 30 h\n", "crew[0].hours: want a time above 0 and at most 24 h"},
+		{"crew hours", "crew:\n  - name: desk\n    at: [1, 1]\n    hours: 30 h\n", "crew[0].hours: want a time of at least 1 s and at most 24 h"},
 		{"crew above ceiling", "crew:\n  - name: desk\n    at: [1, 1]\n    height: 9 m\n", "crew[0].height: the ear height is above the ceiling"},
 		{"unknown crew key", "crew:\n  - name: desk\n    at: [1, 1]\n    shift: 2\n", "crew[0].shift: unknown key"},
 	}

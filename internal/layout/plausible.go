@@ -3,6 +3,7 @@ package layout
 import (
 	"fmt"
 	"math"
+	"regexp"
 	"strconv"
 
 	"arcwright/internal/geometry"
@@ -117,15 +118,39 @@ var (
 	BandRange             = Range{What: "frequency", Min: MinBand, Max: MaxBand, Unit: "Hz", Show: units.FormatFrequency}
 )
 
-// Contains reports whether v is finite and inside r.
+// Contains reports whether v is finite and inside r. A closed bound
+// includes the values that round to it: −60 °C (213.15 K by float
+// arithmetic, 213.14999999999998) is inside a range from 213.15 K.
 func (r Range) Contains(v float64) bool {
-	if math.IsNaN(v) || math.IsInf(v, 0) || v > r.Max {
+	if math.IsNaN(v) || math.IsInf(v, 0) || v > r.Max+edge(r.Max) {
 		return false
 	}
 	if r.MinOpen {
 		return v > r.Min
 	}
-	return v >= r.Min
+	return v >= r.Min-edge(r.Min)
+}
+
+// edge is the rounding allowance at a range bound b: a few parts in 10¹²,
+// far below any digit a user writes and above the error of a unit
+// conversion.
+func edge(b float64) float64 { return 1e-12 * math.Max(math.Abs(b), 1) }
+
+// inside reports whether v is within [lo, hi], the bounds included with
+// their rounding allowance.
+func inside(v, lo, hi float64) bool { return v >= lo-edge(lo) && v <= hi+edge(hi) }
+
+// decimalNumber matches a number as a user writes it: digits with an
+// optional sign, decimal point and exponent; no hexadecimal, underscores,
+// "Inf" or "NaN", which strconv.ParseFloat also reads.
+var decimalNumber = regexp.MustCompile(`^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$`)
+
+// parseDecimal reads a plain decimal number (see decimalNumber).
+func parseDecimal(s string) (float64, error) {
+	if !decimalNumber.MatchString(s) {
+		return 0, fmt.Errorf("%q is not a decimal number", s)
+	}
+	return strconv.ParseFloat(s, 64)
 }
 
 // Want describes r for messages: "above 1 up to 50",
