@@ -109,7 +109,7 @@ func newNumber(value *float64, def float64, r layout.Range) *numberFlag {
 func (n *numberFlag) String() string { return n.text }
 func (n *numberFlag) Type() string   { return "number" }
 func (n *numberFlag) Set(s string) error {
-	v, err := strconv.ParseFloat(strings.TrimSpace(s), 64)
+	v, err := layout.ParseDecimal(strings.TrimSpace(s))
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		return fmt.Errorf("want a finite number, the %s (%s), got %q", n.plausible.What, n.plausible.Want(), s)
 	}

@@ -346,3 +346,12 @@ func TestLayoutEdgeValues(t *testing.T) {
 		})
 	}
 }
+
+// TestHexFloatFlag checks that a number flag takes decimals only, as the
+// layout does: strconv reads 0x1p1 as 2.
+func TestHexFloatFlag(t *testing.T) {
+	_, errOut, code := arc(t, "noise", "--npr", "0x1p1", "--diameter", "50mm", "--temperature-ratio", "1", "--distance", "3m")
+	if code != exitUsage || !strings.Contains(errOut, "--npr") || !strings.Contains(errOut, "0x1p1") {
+		t.Errorf("--npr 0x1p1: exit %d, %q; want %d naming it", code, errOut, exitUsage)
+	}
+}

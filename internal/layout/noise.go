@@ -248,7 +248,7 @@ func (d *decoder) level(n *yaml.Node, field string, w weighting) (float64, bool)
 		t = strings.TrimSpace(strings.TrimSuffix(t, u.suffix))
 		break
 	}
-	v, err := parseDecimal(t)
+	v, err := ParseDecimal(t)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		d.errorf(ErrInvalid, n.Line, field, "want a level in dB, such as %s, got %q", example, s)
 		return 0, false
@@ -291,7 +291,7 @@ func (d *decoder) duration(n *yaml.Node, field, want string, scale map[string]fl
 			break
 		}
 	}
-	v, err := parseDecimal(t)
+	v, err := ParseDecimal(t)
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		d.errorf(ErrInvalid, n.Line, field, "want %s, got %q", want, s)
 		return 0, false

@@ -145,8 +145,9 @@ func inside(v, lo, hi float64) bool { return v >= lo-edge(lo) && v <= hi+edge(hi
 // "Inf" or "NaN", which strconv.ParseFloat also reads.
 var decimalNumber = regexp.MustCompile(`^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$`)
 
-// parseDecimal reads a plain decimal number (see decimalNumber).
-func parseDecimal(s string) (float64, error) {
+// ParseDecimal reads a plain decimal number as a user writes it (see
+// decimalNumber), for the layout and the command-line flags.
+func ParseDecimal(s string) (float64, error) {
 	if !decimalNumber.MatchString(s) {
 		return 0, fmt.Errorf("%q is not a decimal number", s)
 	}

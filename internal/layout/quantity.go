@@ -117,7 +117,7 @@ func (d *decoder) number(n *yaml.Node, field, want string) (float64, bool) {
 	if !ok {
 		return 0, false
 	}
-	v, err := parseDecimal(strings.TrimSpace(s))
+	v, err := ParseDecimal(strings.TrimSpace(s))
 	if err != nil || math.IsNaN(v) || math.IsInf(v, 0) {
 		d.errorf(ErrInvalid, n.Line, field, "want %s, got %q", want, s)
 		return 0, false
