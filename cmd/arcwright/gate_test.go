@@ -285,6 +285,10 @@ func TestPipeWithoutReader(t *testing.T) {
 	if _, err := os.Stat(pdf); err == nil {
 		t.Errorf("the run failed but wrote %s", pdf)
 	}
+	// init to the same pipe: the same refusal, exit 2
+	if _, errOut, code := arc(t, "init", fifo); code != exitUsage || !strings.Contains(errOut, "is a pipe that nothing reads") {
+		t.Errorf("init to a pipe without a reader: exit %d, %q; want %d", code, errOut, exitUsage)
+	}
 	// with a reader (opened first, without waiting; the template fits the
 	// pipe's buffer) the template goes through
 	r, err := os.OpenFile(fifo, os.O_RDONLY|syscall.O_NONBLOCK, 0)

@@ -49,6 +49,9 @@ bad command line.`,
 				return err
 			}
 			if err := export.WriteFiles([]export.Output{out}, nil, stdout); err != nil {
+				if errors.Is(err, export.ErrNoReader) {
+					return usageError{err} // a destination of the command line, as for plan
+				}
 				return err
 			}
 			if path != export.Stdout {
